@@ -3,3 +3,4 @@ export type * from './model/station.js';
 export type * from './model/result.js';
 export type * from './model/verdict.js';
 export { DEFAULT_SOLVER } from './model/station.js';
+export { safetyNotice, safetyHeadline } from './report/safety.js';

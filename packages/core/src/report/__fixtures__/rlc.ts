@@ -92,6 +92,17 @@ function bisect(f: (t: number) => number, a: number, b: number): number {
   return 0.5 * (a + b);
 }
 
+/** Composite Simpson rule on [a, b] with 2000 panels; f smooth on the open interval. */
+function simpson(f: (t: number) => number, a: number, b: number): number {
+  const m = 2000;
+  const h = (b - a) / m;
+  // evaluate just inside the ends so a step at a boundary takes the value of this phase
+  const eps = h * 1e-9;
+  let s = f(a + eps) + f(b - eps);
+  for (let k = 1; k < m; k++) s += (k % 2 ? 4 : 2) * f(a + k * h);
+  return (s * h) / 3;
+}
+
 export function rlcShot(opts: RlcOptions = {}, warnings: Warning[] = []): { station: Station; result: ShotResult } {
   const o = { ...DEF, ...opts };
   const station = rlcStation(opts);
@@ -133,8 +144,13 @@ export function rlcShot(opts: RlcOptions = {}, warnings: Warning[] = []): { stat
     swOf = (t) => (t <= t1 ? iRlc(t) : 0);
     dOf = (t) => (t <= t1 ? 0 : iOf(t));
   }
-  const n = Math.max(2, o.samples);
-  const t_s = Array.from({ length: n }, (_, j) => (tEnd * j) / (n - 1));
+  // samples spread evenly over each phase (every phase boundary is a sample, as the engine stores events)
+  const per = Math.max(2, Math.floor(o.samples / phases.length));
+  const t_s: number[] = [];
+  for (const [k, ph] of phases.entries()) {
+    for (let j = k === 0 ? 0 : 1; j < per; j++) t_s.push(ph.start_s + ((ph.end_s - ph.start_s) * j) / (per - 1));
+  }
+  const n = t_s.length;
   const coilCurrent_A = t_s.map(iOf);
   const capacitorVoltage_V = t_s.map(vOf);
   const switchCurrent_A = t_s.map(swOf);
@@ -142,11 +158,6 @@ export function rlcShot(opts: RlcOptions = {}, warnings: Warning[] = []): { stat
   const field_Apm = station.probes.map((p) => coilCurrent_A.map((i) => p.coil_ApmPerA * i));
   const coilTemperature_C: number[] = [20];
   let heat = 0;
-  const cum = (arr: number[]) => {
-    let s = 0;
-    for (let j = 1; j < n; j++) s += 0.5 * (arr[j - 1] ** 2 + arr[j] ** 2) * (t_s[j] - t_s[j - 1]);
-    return s;
-  };
   for (let j = 1; j < n; j++) {
     heat += 0.5 * (coilCurrent_A[j - 1] ** 2 + coilCurrent_A[j] ** 2) * (t_s[j] - t_s[j - 1]) * o.coil_Ohm;
     coilTemperature_C.push(20 + heat / o.heatCapacity_JpK);
@@ -160,14 +171,18 @@ export function rlcShot(opts: RlcOptions = {}, warnings: Warning[] = []): { stat
   };
   let vMin = 0;
   for (const v of capacitorVoltage_V) vMin = Math.min(vMin, v);
-  const i2tSw = cum(switchCurrent_A);
-  const i2tD = cum(diodeCurrent_A);
+  // integrals of i² phase by phase with composite Simpson (2000 panels per phase) on the closed forms,
+  // so a commutation step between two samples does not smear into the sums
+  const sq = (f: (t: number) => number) => (t: number) => f(t) ** 2;
+  const i2t = (f: (t: number) => number) => phases.reduce((acc, ph) => acc + simpson(sq(f), ph.start_s, ph.end_s), 0);
+  const i2tSw = i2t(swOf);
+  const i2tD = i2t(dOf);
   const initial = 0.5 * C * V0 * V0;
   const capFinal = 0.5 * C * capacitorVoltage_V[n - 1] ** 2;
   const indFinal = 0.5 * L * coilCurrent_A[n - 1] ** 2;
   const esr = o.esr_Ohm * i2tSw;
-  const cable = o.cable_Ohm * cum(coilCurrent_A);
-  const coil = o.coil_Ohm * cum(coilCurrent_A);
+  const cable = o.cable_Ohm * i2t(iOf);
+  const coil = o.coil_Ohm * i2t(iOf);
   const total = capFinal + indFinal + esr + cable + coil;
   const relErr = Math.abs(initial - total) / initial;
   let didt = 0;

@@ -1,0 +1,85 @@
+/**
+ * Atomic writing of output files (reports, plots, CSV, JSON).
+ *
+ * Method: the content goes to a temporary file in the target's own folder (same file system),
+ * which is then renamed over the target; rename within one file system replaces the name in one
+ * step (POSIX rename(2)), so a reader sees either the old file or the complete new one, never a
+ * partial one. On any failure the temporary file is removed.
+ *
+ * Guard: a target that is one of the given input files (same resolved path, or the same file
+ * through a link: same device and inode) is refused, so `--html station.yaml` cannot destroy
+ * the design. Failures become an InputError with code `output.unwritable` or `output.is-input`
+ * naming the path (the CLI exits 2).
+ */
+import { closeSync, fsyncSync, openSync, renameSync, statSync, unlinkSync, writeSync } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
+import { randomBytes } from 'node:crypto';
+import { InputError } from '../design/errors.js';
+
+export interface WriteOutputOptions {
+  /** Input files that must never be overwritten (e.g. the design file). */
+  inputs?: readonly string[];
+  /** Name of the option or field the path came from, for the error (default `output`). */
+  field?: string;
+}
+
+function sameFile(a: string, b: string): boolean {
+  if (resolve(a) === resolve(b)) return true;
+  try {
+    const sa = statSync(a);
+    const sb = statSync(b);
+    return sa.dev === sb.dev && sa.ino === sb.ino;
+  } catch {
+    return false;
+  }
+}
+
+/** Write `content` to `path` atomically; throws InputError when the path is an input or cannot be written. */
+export function writeOutputFile(path: string, content: string | Uint8Array, options: WriteOutputOptions = {}): void {
+  const field = options.field ?? 'output';
+  for (const input of options.inputs ?? []) {
+    if (sameFile(path, input)) {
+      throw new InputError({
+        code: 'output.is-input',
+        path: field,
+        value: path,
+        expected: 'an output path different from the input files',
+        problem: `"${path}" is the input file ${JSON.stringify(input)}; refusing to write over it`,
+      });
+    }
+  }
+  const target = resolve(path);
+  const tmp = join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  let fd: number | undefined;
+  try {
+    fd = openSync(tmp, 'wx', 0o644);
+    const buf = typeof content === 'string' ? Buffer.from(content, 'utf8') : content;
+    let off = 0;
+    while (off < buf.length) off += writeSync(fd, buf, off, buf.length - off);
+    fsyncSync(fd);
+    closeSync(fd);
+    fd = undefined;
+    renameSync(tmp, target);
+  } catch (err) {
+    if (fd !== undefined) {
+      try {
+        closeSync(fd);
+      } catch {
+        /* already closed */
+      }
+    }
+    try {
+      unlinkSync(tmp);
+    } catch {
+      /* never created, or already renamed */
+    }
+    const reason = err instanceof Error ? err.message : String(err);
+    throw new InputError({
+      code: 'output.unwritable',
+      path: field,
+      value: path,
+      expected: 'a writable file path in an existing folder',
+      problem: `cannot write "${path}" (${reason})`,
+    });
+  }
+}

@@ -39,7 +39,7 @@ describe('verdict grading rules', () => {
   });
 
   it('overallStatus takes the worst judged status and ignores info items', () => {
-    const mk = (status: VerdictItem['status']): VerdictItem => ({ ...infoItem('a', 'A', 1, ''), status });
+    const mk = (status: VerdictItem['status']): VerdictItem => ({ ...infoItem('a', 'A', 1, '', 'n'), status });
     expect(overallStatus([])).toBe('pass');
     expect(overallStatus([mk('info'), mk('pass')])).toBe('pass');
     expect(overallStatus([mk('pass'), mk('warn'), mk('info')])).toBe('warn');

@@ -1,0 +1,73 @@
+/**
+ * The `--tolerance` option of a sweep: `PATH=±x%` (also written `PATH=+-x%` or `PATH=+/-x%`),
+ * a relative tolerance on one numeric design field, e.g. `bank.capacitance=±10%`.
+ * In a tolerance run each shot draws the field as nominal·(1 + δ), δ within ±x (see monteCarlo.ts
+ * for the distributions).
+ */
+import { InputError } from '../design/errors.js';
+import { tryParseQuantity, type Dimension } from '../units/quantity.js';
+import { readDesignPath, type DesignPath, type OptionSource } from './designPath.js';
+import { inferDimension } from './inferDimension.js';
+
+export interface ToleranceSpec {
+  text: string;
+  pathText: string;
+  /** Relative half-width, e.g. 0.1 for ±10 %. */
+  fraction: number;
+}
+
+/** A tolerance resolved against a design: the field, its nominal value (design-file number: SI, °C for temperatures). */
+export interface ToleranceField {
+  path: DesignPath;
+  nominal: number;
+  fraction: number;
+  spec: string;
+}
+
+export const TOLERANCE_EXPECTED = 'PATH=±x% (or PATH=+-x%), e.g. bank.capacitance=±10%';
+
+const TOL_RE = /^(?:±|\+-|\+\/-)\s*((?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*%$/;
+
+function tolError(text: string, problem: string, suggestion?: string): InputError {
+  return new InputError({
+    code: 'option.invalid',
+    path: '--tolerance',
+    value: text,
+    expected: TOLERANCE_EXPECTED,
+    problem,
+    ...(suggestion !== undefined ? { suggestion } : {}),
+  });
+}
+
+/** Parse one --tolerance value. Throws InputError (code `option.invalid`, path `--tolerance`). */
+export function parseToleranceSpec(text: string): ToleranceSpec {
+  const eq = text.indexOf('=');
+  if (eq < 0) throw tolError(text, 'there is no "=" between the field path and the tolerance');
+  const pathText = text.slice(0, eq).trim();
+  const rest = text.slice(eq + 1).trim();
+  if (pathText === '') throw tolError(text, 'the field path before "=" is empty');
+  const m = TOL_RE.exec(rest);
+  if (!m) {
+    const bare = /^((?:\d+\.?\d*|\.\d+))\s*%$/.exec(rest);
+    if (bare) throw tolError(text, `"${rest}" has no ± sign`, `${pathText}=±${bare[1]}%`);
+    throw tolError(text, `"${rest}" is not a relative tolerance ±x%`);
+  }
+  const fraction = Number(m[1]) / 100;
+  if (!(fraction > 0 && fraction < 1)) throw tolError(text, `the tolerance ${m[1]} % is outside (0 %, 100 %)`);
+  return { text, pathText, fraction };
+}
+
+/** Resolve a tolerance against the design: the path must exist and hold a number or a quantity. */
+export function resolveTolerance(
+  spec: ToleranceSpec,
+  design: unknown,
+  dimensionOf: (path: DesignPath, current: number | string) => Dimension | undefined = (_p, current) => inferDimension(current),
+): ToleranceField {
+  const source: OptionSource = { option: '--tolerance', value: spec.text, expected: TOLERANCE_EXPECTED };
+  const { path, value } = readDesignPath(design, spec.pathText, source);
+  const dimension = dimensionOf(path, value);
+  const q = tryParseQuantity(value, dimension ?? 'dimensionless');
+  if (!q.ok) throw tolError(spec.text, `the design's value of ${path.text}, ${JSON.stringify(value)}, is not a number (${q.reason})`);
+  if (q.value === 0) throw tolError(spec.text, `${path.text} is 0 in the design, so a relative tolerance has no effect`);
+  return { path, nominal: q.value, fraction: spec.fraction, spec: spec.text };
+}

@@ -25,6 +25,10 @@ describe('formatQuantity(value, unit) picks the SI prefix (BIPM SI brochure, 9th
     expect(formatQuantity(45.67, 'K')).toBe('45.7 K');
     expect(formatQuantity(12.34, '%')).toBe('12.3 %');
   });
+  it('shows areas in mm² or m², never with a squared prefix', () => {
+    expect(formatQuantity(2.5e-6, 'm²')).toBe('2.5 mm²');
+    expect(formatQuantity(0.5, 'm²')).toBe('0.5 m²');
+  });
   it('honours the digits option', () => {
     expect(formatQuantity(2816, 'J', { digits: 4 })).toBe('2.816 kJ');
   });
@@ -37,7 +41,8 @@ describe('formatQuantity(value, unit) picks the SI prefix (BIPM SI brochure, 9th
 describe('formatPlain and formatPercent', () => {
   it('uses exponent notation outside [1e-3, 1e6)', () => {
     expect(formatPlain(1.234e-5)).toBe('1.23e-5');
-    expect(formatPlain(2.5e7)).toBe('2.50e7');
+    expect(formatPlain(2.5e7)).toBe('2.5e7');
+    expect(formatPlain(1e-9)).toBe('1e-9');
     expect(formatPlain(0.5)).toBe('0.5');
   });
   it('prints a signed percentage from a fraction', () => {

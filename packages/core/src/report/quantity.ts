@@ -46,6 +46,10 @@ export function formatQuantity(value: number, unit: string, options: FormatQuant
   if (Number.isNaN(value)) return 'n/a';
   if (!Number.isFinite(value)) return `${value > 0 ? '∞' : '−∞'}${sep}${unit}`.trimEnd();
   if (UNPREFIXED.has(unit)) return `${formatPlain(value, digits)}${sep}${unit}`.trimEnd();
+  // a prefix on m² would square (1 mm² = 1e-6 m²): show small areas in mm², larger ones in m²
+  if (unit === 'm²') {
+    return Math.abs(value) < 1e-2 ? `${formatPlain(value * 1e6, digits)} mm²` : `${formatPlain(value, digits)} m²`;
+  }
   if (value === 0) return `0 ${unit}`;
   const abs = Math.abs(value);
   let exp = 3 * Math.floor(Math.log10(abs) / 3);
@@ -75,7 +79,7 @@ export function formatPlain(value: number, digits = 3): string {
     return sign + Number(abs.toPrecision(digits)).toString();
   }
   const [m, e] = abs.toExponential(digits - 1).split('e');
-  return `${sign}${m}e${Number(e)}`;
+  return `${sign}${Number(m)}e${Number(e)}`;
 }
 
 /** A fraction as a signed percentage, e.g. 0.234 -> "+23.4 %". NaN -> "n/a". */

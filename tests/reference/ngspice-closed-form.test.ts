@@ -10,7 +10,7 @@
  * output (the peak is flat: its time is found from a parabola through three output samples).
  */
 import { describe, expect, test } from 'vitest';
-import { ngspiceStatus, refinedPeak, runNgspice, sampleAt, stationDeck, stationTraces, wrdataTraces, parseWrdata, MIN_RON_OHM, SNUBBER_C_F, NgspiceError } from '../support/ngspice.js';
+import { ngspiceStatus, refinedPeak, runNgspice, sampleAt, stationDeck, stationTraces, wrdataTraces, parseWrdata, MIN_RON_OHM, SNUBBER_C_F, NgspiceError, capacitanceSweepDeck, parseSweep } from '../support/ngspice.js';
 import { freewheelCurrent_A, makeStation, seriesRlc, seriesTotals } from './ngspice-circuits.js';
 
 const ng = ngspiceStatus();
@@ -157,5 +157,31 @@ describe.skipIf(!ng.path)('ngspice vs closed-form series RLC (Nilsson & Riedel, 
     expect(worst / I1).toBeLessThan(1e-5);
     // The diode carries the whole coil current in this phase (switch current zero).
     expect(Math.abs(sampleAt(tr.diode, t1) / I1 - 1)).toBeLessThan(1e-5);
+  });
+});
+
+describe.skipIf(!ng.path)('ngspice capacitance sweep in one process (capacitanceSweepDeck) vs closed-form series RLC', () => {
+  test('five capacitances from 0.5 to 8 mF: peak current within 1e-5 and its time within 1e-4 of the closed form (Nilsson & Riedel)', () => {
+    const station = makeStation({
+      capacitance_F: 1e-3,
+      voltage_V: 1600,
+      esr_Ohm: 4e-3,
+      esl_H: 0.2e-6,
+      switch: { kind: 'thyristor', thresholdVoltage_V: 0, slopeResistance_Ohm: 0.4e-3 },
+      cableResistance_Ohm: 3e-3,
+      cableInductance_H: 1.5e-6,
+      coilInductance_H: 180e-6,
+      coilResistance_Ohm: 25e-3,
+    });
+    const cs = [0.5e-3, 1e-3, 2.2e-3, 4.7e-3, 8e-3];
+    const points = parseSweep(runNgspice(capacitanceSweepDeck(station, cs)).stdout);
+    expect(points.map((p) => p.capacitance_F)).toEqual(cs);
+    const { R_Ohm, L_H } = seriesTotals(station);
+    for (const p of points) {
+      const cf = seriesRlc(p.capacitance_F, 1600, R_Ohm, L_H);
+      // Same tolerances as the single runs above (same RELTOL and step per pulse).
+      expect(Math.abs(p.peakCurrent_A / cf.peakCurrent_A - 1)).toBeLessThan(1e-5);
+      expect(Math.abs(p.timeOfPeak_s / cf.timeOfPeak_s - 1)).toBeLessThan(1e-4);
+    }
   });
 });

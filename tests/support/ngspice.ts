@@ -215,25 +215,30 @@ export function spiceNumber(x: number): string {
   return x.toExponential(16);
 }
 
+/** Circuit settings of a station netlist. */
+export interface NetlistOptions {
+  /** ngspice RELTOL (default 1e-6). */
+  relTol?: number;
+  /** Snubber capacitance across switch and diode, F (default SNUBBER_C_F; 0: none, which fails at a device turn-off). */
+  snubber_F?: number;
+}
+
 /** Transient settings of a station deck. */
-export interface DeckOptions {
+export interface DeckOptions extends NetlistOptions {
   /** Stop time, s. */
   tStop_s: number;
   /** Largest internal step and output step, s. */
   maxStep_s: number;
-  /** ngspice RELTOL (default 1e-6). */
-  relTol?: number;
   /** Name of the wrdata file (default `out.txt`). */
   outFile?: string;
-  /** Snubber capacitance across switch and diode, F (default SNUBBER_C_F; 0: none, which fails at a device turn-off). */
-  snubber_F?: number;
 }
 
 /** The vectors a station deck writes, in order: coil current, switch current, diode current, capacitor voltage. */
 export const STATION_VECTORS = ['coil', 'switch', 'diode', 'vcap'] as const;
 
 /**
- * ngspice deck of a fluxkick Station, resistances taken at the initial temperature and held constant
+ * ngspice netlist (title, elements, models, .options; no analysis) of a fluxkick Station, resistances taken at the
+ * initial temperature and held constant
  * (ngspice has no conductor heating here; compare with tempCoeff_perK = 0 in the station).
  *
  * Topology (matches model/station.ts; snubbers not shown):
@@ -242,8 +247,8 @@ export const STATION_VECTORS = ['coil', 'switch', 'diode', 'vcap'] as const;
  * Coupled loops: L_k in series with R_k, each a closed loop; coupling by K elements, k = M/√(L_a·L_b).
  * Nonlinear (iron-yoke) coils are not supported.
  */
-export function stationDeck(station: Station, opts: DeckOptions): string {
-  if (station.coil.nonlinear) throw new Error('stationDeck: nonlinear coils are not supported');
+export function stationNetlist(station: Station, opts: NetlistOptions = {}): string[] {
+  if (station.coil.nonlinear) throw new Error('stationNetlist: nonlinear coils are not supported');
   const n = spiceNumber;
   const resistanceAt = (r20: number, alpha: number, T: number) => r20 * (1 + alpha * (T - 20));
   const { bank, cable, coil } = station;
@@ -314,6 +319,16 @@ export function stationDeck(station: Station, opts: DeckOptions): string {
   // tighter values (1e-9) make Newton fail at a diode turn-off ("timestep too small").
   const relTol = opts.relTol ?? 1e-6;
   lines.push(`.options reltol=${n(relTol)} abstol=1e-6 vntol=1e-6 chgtol=1e-16 trtol=1`);
+  return lines;
+}
+
+/**
+ * Complete deck: the station netlist, one transient run from the charged state (`uic`), and `wrdata` of
+ * STATION_VECTORS into `opts.outFile`.
+ */
+export function stationDeck(station: Station, opts: DeckOptions): string {
+  const n = spiceNumber;
+  const lines = stationNetlist(station, opts);
   lines.push(`.tran ${n(opts.maxStep_s)} ${n(opts.tStop_s)} 0 ${n(opts.maxStep_s)} uic`);
   lines.push('.control');
   lines.push('run');
@@ -333,4 +348,75 @@ export function stationTraces(run: NgspiceRun, outFile = 'out.txt'): Record<(typ
   const blocks = wrdataTraces(text, [...STATION_VECTORS]);
   if (blocks.length !== 1) throw new Error(`expected one analysis in ${outFile}, found ${blocks.length}`);
   return blocks[0] as Record<(typeof STATION_VECTORS)[number], Trace>;
+}
+
+/** One point of a capacitance sweep as ngspice computed it. */
+export interface SweepPoint {
+  capacitance_F: number;
+  peakCurrent_A: number;
+  timeOfPeak_s: number;
+}
+
+/**
+ * One deck that sweeps the bank capacitance inside ngspice: a `.control` loop over `capacitances_F` that, for each
+ * value, alters C1, runs a transient of `stopFactor`·π·√(L_loop·C) (past the first current zero of the series loop)
+ * with a largest step of that time / `pointsPerPulse`, and finds the peak of the coil current from its own samples:
+ * the largest sample and the parabola through it and its two neighbours (vector arithmetic in ngspice's control
+ * language, full double precision; `meas` would round to 7 digits). All results are printed at the end
+ * (parseSweep reads them).
+ */
+export function capacitanceSweepDeck(
+  station: Station,
+  capacitances_F: number[],
+  opts: NetlistOptions & { pointsPerPulse?: number; stopFactor?: number } = {},
+): string {
+  const n = spiceNumber;
+  const count = capacitances_F.length;
+  if (count === 0) throw new Error('capacitanceSweepDeck: no capacitances');
+  const loop_H = station.bank.esl_H + station.cable.inductance_H + station.coil.inductance_H;
+  const lines = stationNetlist(station, opts);
+  const points = opts.pointsPerPulse ?? 2000;
+  const stop = opts.stopFactor ?? 1.05;
+  lines.push('.control');
+  lines.push('set noaskquit');
+  lines.push('set numdgt=15');
+  lines.push(`let cvals = vector(${count})`);
+  capacitances_F.forEach((c, k) => lines.push(`let cvals[${k}] = ${n(c)}`));
+  lines.push(`let ipks = vector(${count})`, `let tpks = vector(${count})`, 'let k = 0');
+  lines.push(`while k < ${count}`);
+  lines.push('  let cval = cvals[k]');
+  lines.push('  alter C1 = $&cval');
+  lines.push(`  let tstop = ${n(stop)}*pi*sqrt(${n(loop_H)}*cval)`);
+  lines.push(`  let tstep = tstop/${points}`);
+  lines.push('  tran $&tstep $&tstop 0 $&tstep uic');
+  // Peak: sample triples (a, b, c); the mask picks the triple whose middle is the largest sample.
+  lines.push('  let y = i(vcoil)', '  let t = time', '  let m = length(y)');
+  lines.push('  let ya = y[0,m-3]', '  let yb = y[1,m-2]', '  let yc = y[2,m-1]');
+  lines.push('  let ta = t[0,m-3]', '  let tb = t[1,m-2]', '  let tc = t[2,m-1]');
+  lines.push('  let mask = (yb ge ya) and (yb gt yc) and (yb eq vecmax(y))');
+  lines.push('  let w = length(mask)/(mean(mask)*length(mask))');
+  lines.push('  let a0 = mean(mask*ya)*w', '  let b0 = mean(mask*yb)*w', '  let c0 = mean(mask*yc)*w');
+  lines.push('  let t0 = mean(mask*ta)*w', '  let t1 = mean(mask*tb)*w', '  let t2 = mean(mask*tc)*w');
+  lines.push('  let d01 = (b0-a0)/(t1-t0)', '  let d12 = (c0-b0)/(t2-t1)', '  let qa = (d12-d01)/(t2-t0)');
+  lines.push('  let qb = d01 - qa*(t0+t1)', '  let tv = -qb/(2*qa)');
+  lines.push('  let ipks[k] = a0 + d01*(tv-t0) + qa*(tv-t0)*(tv-t1)', '  let tpks[k] = tv');
+  lines.push('  destroy $curplot', '  let k = k + 1');
+  lines.push('end');
+  // `print` honours numdgt (15 digits); `echo` would round to 6.
+  lines.push('set width=200', 'set height=100000', 'print cvals ipks tpks');
+  lines.push('quit', '.endc', '.end');
+  return lines.join('\n') + '\n';
+}
+
+/** Points printed by a capacitanceSweepDeck run (the `print cvals ipks tpks` table: index, C, ipk, tpk). */
+export function parseSweep(stdout: string): SweepPoint[] {
+  const out: SweepPoint[] = [];
+  for (const line of stdout.split('\n')) {
+    const m = /^(\d+)\s+(\S+)\s+(\S+)\s+(\S+)\s*$/.exec(line);
+    if (!m) continue;
+    const [c, i, t] = [Number(m[2]), Number(m[3]), Number(m[4])];
+    if ([c, i, t].some((x) => Number.isNaN(x))) continue;
+    out[Number(m[1])] = { capacitance_F: c, peakCurrent_A: i, timeOfPeak_s: t };
+  }
+  return out;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatPercent, formatPlain, formatQuantity } from './quantity.js';
+import { engineeringPrefix, formatPercent, formatPlain, formatQuantity } from './quantity.js';
 
 describe('formatQuantity(value, unit) picks the SI prefix (BIPM SI brochure, 9th ed.)', () => {
   it('puts the mantissa in [1, 1000) with 3 significant figures', () => {
@@ -49,5 +49,14 @@ describe('formatPlain and formatPercent', () => {
     expect(formatPercent(0.234)).toBe('+23.4 %');
     expect(formatPercent(-0.05)).toBe('−5 %');
     expect(formatPercent(NaN)).toBe('n/a');
+  });
+});
+
+describe('engineeringPrefix(maxAbs, unit)', () => {
+  it('picks one prefix for a whole axis', () => {
+    expect(engineeringPrefix(45.8e-3, 's')).toEqual({ factor: 1e-3, unit: 'ms' });
+    expect(engineeringPrefix(5120, 'A')).toEqual({ factor: 1e3, unit: 'kA' });
+    expect(engineeringPrefix(950, '°C')).toEqual({ factor: 1, unit: '°C' });
+    expect(engineeringPrefix(0, 'V')).toEqual({ factor: 1, unit: 'V' });
   });
 });

@@ -65,6 +65,16 @@ export function formatQuantity(value: number, unit: string, options: FormatQuant
 }
 
 /**
+ * The SI prefix that suits values up to `maxAbs` in `unit`, for a whole axis or column:
+ * display value = SI value / factor, shown unit = symbol + unit. °C, K, % and ratios get factor 1.
+ */
+export function engineeringPrefix(maxAbs: number, unit: string): { factor: number; unit: string } {
+  if (UNPREFIXED.has(unit) || unit === 'm²' || !(maxAbs > 0) || !Number.isFinite(maxAbs)) return { factor: 1, unit };
+  const exp = Math.max(-12, Math.min(9, 3 * Math.floor(Math.log10(maxAbs) / 3)));
+  return { factor: 10 ** exp, unit: `${PREFIXES[exp]}${unit}` };
+}
+
+/**
  * A plain number with `digits` significant figures (no prefix), switching to exponent
  * notation outside [1e-3, 1e6).
  */

@@ -152,6 +152,9 @@ export function checkMagneticNetwork(net: MagneticNetwork): string | null {
   return null;
 }
 
+/** Structure checks already made (networks are treated as immutable once solved). */
+const checkedNetworks = new WeakMap<MagneticNetwork, string | null>();
+
 /** Solves A·x = b in place by Gaussian elimination with partial pivoting (small dense systems). */
 function solveDense(A: number[][], b: number[]): number[] {
   const n = b.length;
@@ -185,7 +188,11 @@ function solveDense(A: number[][], b: number[]): number[] {
  * `converged: false` with the residual, never thrown.
  */
 export function solveMagneticCircuit(net: MagneticNetwork, current_A: number, options: SolveOptions = {}): MagneticSolution {
-  const problem = checkMagneticNetwork(net);
+  let problem = checkedNetworks.get(net);
+  if (problem === undefined) {
+    problem = checkMagneticNetwork(net);
+    checkedNetworks.set(net, problem);
+  }
   if (problem) throw new RangeError(`magnetic network: ${problem}`);
   const relTol = options.relTol ?? 1e-12;
   const maxIterations = options.maxIterations ?? 100;

@@ -111,8 +111,20 @@ const YOKE_PREFIX = 'yoke:';
 const POLE_PREFIX = 'pole:';
 const PART = 'part';
 
+/** Networks already built (a spec is treated as immutable once used). */
+const networks = new WeakMap<YokeSpec, MagneticNetwork>();
+
 /** Builds the magnetic network of a yoke fixture. Throws RangeError on an impossible spec (the design layer validates user input first). */
 export function yokeNetwork(spec: YokeSpec): MagneticNetwork {
+  let net = networks.get(spec);
+  if (!net) {
+    net = buildYokeNetwork(spec);
+    networks.set(spec, net);
+  }
+  return net;
+}
+
+function buildYokeNetwork(spec: YokeSpec): MagneticNetwork {
   if (!(spec.turns > 0)) throw new RangeError(`yoke: turns must be > 0 (got ${spec.turns})`);
   if (spec.yoke.length === 0) throw new RangeError('yoke: at least one yoke member is needed');
   if (!(spec.part.recoilPermeability > 0)) throw new RangeError(`yoke: part recoil permeability must be > 0 (got ${spec.part.recoilPermeability})`);

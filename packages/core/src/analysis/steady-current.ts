@@ -1,0 +1,254 @@
+/**
+ * Steady current: a DC supply holds a current in the fixture coil (a bench electromagnet, an
+ * iron-yoke fixture used as a DC magnetizer, or a pulse coil run on DC for a test). The same
+ * questions as for a pulse station: the field at the part, the coil's temperature, and the
+ * current (and supply) needed for a target field.
+ *
+ * Supply: set voltage V (open circuit) with a current limit I_lim and a series resistance R_s
+ * (source and leads). Its current into a coil of resistance R is
+ *   I = min(I_lim, V/(R_s + R))            (constant-voltage or constant-current mode).
+ * Coil: R(T) = R20·(1 + α20·(T − 20 °C)) (DOMAIN.md; IEC 60028 for α20 of copper).
+ * Cooling: lumped, to ambient through a thermal resistance R_th = 1/(h·A) (Newton's law of
+ * cooling with a heat-transfer coefficient h over the cooled surface A). Steady state:
+ *   T = T_amb + R_th·I(T)²·R(T).
+ * Method: f(T) = T − T_amb − R_th·I(T)²·R(T) is scanned upward from T_amb in 0.5 K steps and
+ * its first root is polished by Brent's method (solve/brent.ts): the first root is the state a
+ * coil warming up from ambient settles at (f < 0 below it: heating exceeds cooling). No root
+ * below T_amb + 2000 K is thermal runaway: in constant-current mode exactly when
+ * R_th·I²·R20·α20 ≥ 1 (the linear equation's closed form).
+ * Approach to the steady state: linearizing C_th·dT/dt = P(T) − (T − T_amb)/R_th about it gives
+ * the time constant τ = C_th·R_th/(1 − R_th·dP/dT) (exact in constant-current mode, where the
+ * equation is linear); 3τ reaches 95 % of the rise.
+ * The field at the part comes from the fixture's field law (linear field per ampere for an
+ * air-core coil, the magnetic circuit for a yoke); the current for a target field is its
+ * inverse (bracketed, then Brent).
+ */
+
+import type { Warning } from '../model/result.js';
+import { brentZero } from '../solve/brent.js';
+
+/** A DC supply. */
+export interface DcSupply {
+  /** Set (open-circuit) voltage, V (> 0; Infinity: a pure current source). */
+  voltage_V: number;
+  /** Current limit, A (> 0; Infinity: a pure voltage source). */
+  currentLimit_A: number;
+  /** Source and lead resistance in series with the coil, Ω (≥ 0). */
+  seriesResistance_Ohm: number;
+}
+
+/** The coil's resistance law and (optionally) heat capacity. */
+export interface SteadyCoil {
+  /** Ω at 20 °C (> 0). */
+  resistance20_Ohm: number;
+  /** 1/K. */
+  tempCoeff_perK: number;
+  /** J/K, for the time constant (optional). */
+  heatCapacity_JpK?: number;
+}
+
+/** Lumped cooling to ambient. */
+export interface CoilCooling {
+  /** °C. */
+  ambient_C: number;
+  /** Thermal resistance coil → ambient, K/W (= 1/(h·A)), > 0. */
+  thermalResistance_KpW: number;
+}
+
+/** Field at the part as a function of coil current (odd, increasing). */
+export interface SteadyFieldLaw {
+  fieldAtPart_Apm(current_A: number): number;
+  /** Optional exact inverse; otherwise the analysis brackets and solves. */
+  currentForField_A?(field_Apm: number): number;
+}
+
+export interface SteadyOptions {
+  /** Field wanted at the part, A/m (> 0). */
+  targetField_Apm?: number;
+  /** Highest allowed coil temperature, °C (e.g. the insulation class, IEC 60085). */
+  maxTemperature_C?: number;
+}
+
+/** One steady state. */
+export interface SteadyPoint {
+  current_A: number;
+  /** Coil temperature, °C. */
+  coilTemperature_C: number;
+  temperatureRise_K: number;
+  coilResistance_Ohm: number;
+  /** I·R(T), V. */
+  coilVoltage_V: number;
+  /** I·(R_s + R(T)): what the supply's terminals must give, V. */
+  supplyVoltage_V: number;
+  /** I²·R(T), W. */
+  coilPower_W: number;
+  partField_Apm: number;
+  /** τ of the approach to this state, s (undefined without a heat capacity). */
+  thermalTimeConstant_s?: number;
+}
+
+export interface SteadyCurrentResult {
+  /** How the supply settles: on its voltage, on its current limit, or no steady state. */
+  mode: 'voltage-limited' | 'current-limited' | 'runaway';
+  /** The state the coil settles at (null: runaway). */
+  point: SteadyPoint | null;
+  /** The coil when it is switched on cold (at ambient). */
+  cold: SteadyPoint;
+  target?: {
+    field_Apm: number;
+    /** Current for the target field, A. */
+    current_A: number;
+    /** The steady state when that current is held (null: runaway at that current). */
+    point: SteadyPoint | null;
+    /** The supply and the coil allow it. */
+    reachable: boolean;
+    /** What stands in the way: `current-limit`, `voltage`, `temperature`, `runaway`. */
+    limits: ('current-limit' | 'voltage' | 'temperature' | 'runaway')[];
+  };
+  warnings: Warning[];
+}
+
+const SCAN_STEP_K = 0.5;
+const SCAN_SPAN_K = 2000;
+
+function resistanceAt(coil: SteadyCoil, t_C: number): number {
+  return coil.resistance20_Ohm * (1 + coil.tempCoeff_perK * (t_C - 20));
+}
+
+function supplyCurrent(s: DcSupply, r: number): number {
+  const v = Number.isFinite(s.voltage_V) ? s.voltage_V / (s.seriesResistance_Ohm + r) : Infinity;
+  return Math.min(s.currentLimit_A, v);
+}
+
+/** First root of T − T_amb − R_th·P(T) above ambient, or NaN when none below T_amb + 2000 K. */
+function settle(power: (t: number) => number, cooling: CoilCooling): number {
+  const f = (t: number) => t - cooling.ambient_C - cooling.thermalResistance_KpW * power(t);
+  let a = cooling.ambient_C;
+  let fa = f(a);
+  if (fa >= 0) return a;
+  for (let k = 1; k * SCAN_STEP_K <= SCAN_SPAN_K; k++) {
+    const b = cooling.ambient_C + k * SCAN_STEP_K;
+    const fb = f(b);
+    if (fb >= 0) return brentZero(f, a, b, fa, fb, 1e-10);
+    a = b;
+    fa = fb;
+  }
+  return NaN;
+}
+
+function pointAt(coil: SteadyCoil, supply: DcSupply, cooling: CoilCooling, field: SteadyFieldLaw, current_A: number, t_C: number, dPdT: number): SteadyPoint {
+  const r = resistanceAt(coil, t_C);
+  const p: SteadyPoint = {
+    current_A,
+    coilTemperature_C: t_C,
+    temperatureRise_K: t_C - cooling.ambient_C,
+    coilResistance_Ohm: r,
+    coilVoltage_V: current_A * r,
+    supplyVoltage_V: current_A * (supply.seriesResistance_Ohm + r),
+    coilPower_W: current_A * current_A * r,
+    partField_Apm: field.fieldAtPart_Apm(current_A),
+  };
+  if (coil.heatCapacity_JpK !== undefined && coil.heatCapacity_JpK > 0) {
+    const denom = 1 - cooling.thermalResistance_KpW * dPdT;
+    if (denom > 0) p.thermalTimeConstant_s = (coil.heatCapacity_JpK * cooling.thermalResistance_KpW) / denom;
+  }
+  return p;
+}
+
+function centralSlope(f: (t: number) => number, t: number): number {
+  const h = 1e-3;
+  return (f(t + h) - f(t - h)) / (2 * h);
+}
+
+/** Current giving `target` on an odd increasing field law: bracket by doubling, then Brent. */
+export function currentForField(field: SteadyFieldLaw, target_Apm: number): number {
+  if (field.currentForField_A) return field.currentForField_A(target_Apm);
+  if (!(target_Apm > 0)) return NaN;
+  const g = (i: number) => field.fieldAtPart_Apm(i) - target_Apm;
+  let a = 0;
+  let ga = g(0);
+  let b = 1;
+  let gb = g(b);
+  for (let k = 0; k < 200 && gb < 0; k++) {
+    a = b;
+    ga = gb;
+    b *= 2;
+    gb = g(b);
+  }
+  if (gb < 0) return NaN;
+  return brentZero(g, a, b, ga, gb, 1e-12 * b);
+}
+
+/**
+ * The steady state of a coil held by a DC supply, and (optionally) what a target field needs.
+ * Inputs are assumed checked (positive resistances, R_th > 0); numerical trouble becomes a warning.
+ */
+export function steadyCurrent(coil: SteadyCoil, supply: DcSupply, cooling: CoilCooling, field: SteadyFieldLaw, options: SteadyOptions = {}): SteadyCurrentResult {
+  const warnings: Warning[] = [];
+  const power = (t: number) => {
+    const r = resistanceAt(coil, t);
+    const i = supplyCurrent(supply, r);
+    return i * i * r;
+  };
+  const rCold = resistanceAt(coil, cooling.ambient_C);
+  const iCold = supplyCurrent(supply, rCold);
+  const cold = pointAt(coil, supply, cooling, field, iCold, cooling.ambient_C, 0);
+  delete cold.thermalTimeConstant_s;
+
+  const t = settle(power, cooling);
+  let mode: SteadyCurrentResult['mode'];
+  let point: SteadyPoint | null = null;
+  if (Number.isNaN(t)) {
+    mode = 'runaway';
+    warnings.push({
+      code: 'steady.thermal-runaway',
+      message: `No steady temperature below ${cooling.ambient_C + SCAN_SPAN_K} °C: at this supply setting the coil's heating outgrows its cooling (in constant-current mode when R_th·I²·R20·α20 ≥ 1). Lower the current or improve the cooling.`,
+      severity: 'error',
+    });
+  } else {
+    const r = resistanceAt(coil, t);
+    const i = supplyCurrent(supply, r);
+    mode = i >= supply.currentLimit_A ? 'current-limited' : 'voltage-limited';
+    point = pointAt(coil, supply, cooling, field, i, t, centralSlope(power, t));
+    if (options.maxTemperature_C !== undefined && t > options.maxTemperature_C) {
+      warnings.push({
+        code: 'steady.temperature-limit',
+        message: `The coil settles at ${t.toFixed(1)} °C, above the allowed ${options.maxTemperature_C} °C.`,
+        severity: 'error',
+      });
+    }
+  }
+
+  const result: SteadyCurrentResult = { mode, point, cold, warnings };
+  if (options.targetField_Apm !== undefined) {
+    const target = options.targetField_Apm;
+    const iReq = currentForField(field, target);
+    const limits: NonNullable<SteadyCurrentResult['target']>['limits'] = [];
+    let tp: SteadyPoint | null = null;
+    if (!Number.isFinite(iReq)) {
+      warnings.push({ code: 'steady.target-unreachable', message: `No current gives ${target} A/m at the part with this fixture.`, severity: 'error' });
+    } else {
+      // Held at iReq (as if the supply were set to exactly that current).
+      const held: DcSupply = { voltage_V: Infinity, currentLimit_A: iReq, seriesResistance_Ohm: supply.seriesResistance_Ohm };
+      const heldPower = (tt: number) => iReq * iReq * resistanceAt(coil, tt);
+      const tReq = settle(heldPower, cooling);
+      if (iReq > supply.currentLimit_A * (1 + 1e-12)) limits.push('current-limit');
+      if (Number.isNaN(tReq)) {
+        limits.push('runaway');
+      } else {
+        tp = pointAt(coil, held, cooling, field, iReq, tReq, centralSlope(heldPower, tReq));
+        if (tp.supplyVoltage_V > supply.voltage_V * (1 + 1e-12)) limits.push('voltage');
+        if (options.maxTemperature_C !== undefined && tReq > options.maxTemperature_C) limits.push('temperature');
+      }
+      if (limits.length) {
+        warnings.push({
+          code: 'steady.target-unreachable',
+          message: `The target field ${target} A/m needs ${iReq.toPrecision(4)} A held steady; blocked by: ${limits.join(', ')}.`,
+          severity: 'warning',
+        });
+      }
+    }
+    result.target = { field_Apm: target, current_A: iReq, point: tp, reachable: Number.isFinite(iReq) && limits.length === 0, limits };
+  }
+  return result;
+}

@@ -1,0 +1,139 @@
+/**
+ * Run a list of independent tasks on worker threads (tinypool), or in this thread when
+ * `threads` is 0, keeping results in task order so that the output does not depend on the
+ * number of threads or on which thread finished first.
+ *
+ * - At most `2·threads` tasks are in flight; the rest wait here, so an interruption leaves no
+ *   long queue behind.
+ * - `signal` (an AbortSignal, e.g. from Ctrl-C): no new task starts; tasks already running
+ *   finish and are kept; the result says `interrupted: true` and which tasks completed.
+ * - A task that throws in the worker is recorded as `{ error }` for that task; the others go on.
+ *
+ * The worker file: a module whose default export is `(task) => result` (may be async).
+ * When it is TypeScript (running from source under tsx or vitest), the threads start
+ * tsWorkerBootstrap.mjs, which registers tsx's loader inside the thread (Node 20 does not pass
+ * `--import` loaders on to worker threads) and then imports the TypeScript module; built code
+ * (dist/) runs its .js worker directly. See `resolveWorkerFile`.
+ */
+import { existsSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import Tinypool from 'tinypool';
+
+export interface RunPoolOptions<R> {
+  /** Worker threads; 0 runs every task in this thread with `inThread`. Default: available cores. */
+  threads?: number;
+  /** Worker module (file URL or path). Required when threads > 0. */
+  workerFile?: URL | string;
+  /** The same function as the worker's default export, for threads = 0. */
+  inThread?: (task: unknown) => R | Promise<R>;
+  /** Stop starting new tasks when aborted. */
+  signal?: AbortSignal;
+  /** Called after each task with (completed, total). */
+  onProgress?: (completed: number, total: number) => void;
+}
+
+export type TaskOutcome<R> = { ok: true; value: R } | { ok: false; error: string };
+
+export interface PoolRun<R> {
+  /** outcomes[i] for task i; undefined when the task never ran (interrupted). */
+  outcomes: (TaskOutcome<R> | undefined)[];
+  completed: number;
+  interrupted: boolean;
+  threads: number;
+  wallTime_s: number;
+}
+
+/** Worker threads to use by default: the machine's available parallelism. */
+export function defaultThreads(): number {
+  return Math.max(1, availableParallelism());
+}
+
+function errorText(e: unknown): string {
+  return e instanceof Error ? `${e.name}: ${e.message}` : String(e);
+}
+
+export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions<R>): Promise<PoolRun<R>> {
+  const started = performance.now();
+  const threads = options.threads ?? defaultThreads();
+  const total = tasks.length;
+  const outcomes: (TaskOutcome<R> | undefined)[] = new Array(total).fill(undefined);
+  let completed = 0;
+  const aborted = () => options.signal?.aborted === true;
+  const record = (i: number, outcome: TaskOutcome<R>) => {
+    outcomes[i] = outcome;
+    completed += 1;
+    options.onProgress?.(completed, total);
+  };
+
+  if (threads === 0) {
+    if (!options.inThread) throw new Error('runPool: threads = 0 needs inThread');
+    for (let i = 0; i < total && !aborted(); i++) {
+      try {
+        record(i, { ok: true, value: await options.inThread(tasks[i]) });
+      } catch (e) {
+        record(i, { ok: false, error: errorText(e) });
+      }
+      // Let signal handlers (Ctrl-C) run between tasks.
+      if (i % 16 === 15) await new Promise((r) => setImmediate(r));
+    }
+    return { outcomes, completed, interrupted: completed < total, threads: 0, wallTime_s: (performance.now() - started) / 1000 };
+  }
+
+  if (options.workerFile === undefined) throw new Error('runPool: threads > 0 needs workerFile');
+  const target = options.workerFile instanceof URL ? fileURLToPath(options.workerFile) : options.workerFile;
+  // A TypeScript worker goes through tsWorkerBootstrap.mjs, which registers tsx in the thread.
+  const viaBootstrap = /\.[cm]?ts$/.test(target);
+  const filename = viaBootstrap ? fileURLToPath(new URL('./tsWorkerBootstrap.mjs', here())) : target;
+  const pool = new Tinypool({ filename, minThreads: Math.min(threads, Math.max(1, total)), maxThreads: threads });
+  const wrap = (task: T): unknown => (viaBootstrap ? { module: target, task } : task);
+  try {
+    let next = 0;
+    const window = 2 * threads;
+    await new Promise<void>((resolve) => {
+      let inFlight = 0;
+      const launch = () => {
+        while (inFlight < window && next < total && !aborted()) {
+          const i = next++;
+          inFlight += 1;
+          pool.run(wrap(tasks[i]!)).then(
+            (value: R) => record(i, { ok: true, value }),
+            (e: unknown) => record(i, { ok: false, error: errorText(e) }),
+          ).finally(() => {
+            inFlight -= 1;
+            if (inFlight === 0 && (next >= total || aborted())) resolve();
+            else launch();
+          });
+        }
+        if (inFlight === 0) resolve();
+      };
+      options.signal?.addEventListener('abort', () => {
+        if (inFlight === 0) resolve();
+      });
+      launch();
+    });
+  } finally {
+    await pool.destroy();
+  }
+  return { outcomes, completed, interrupted: completed < total, threads, wallTime_s: (performance.now() - started) / 1000 };
+}
+
+/**
+ * Find a worker module next to the calling module: `<name>.ts` when running from source
+ * (tsx, vitest), `<name>.js` in a build (tsup emits the worker as its own entry beside
+ * index.js). `here` is the caller's `import.meta.url`.
+ */
+export function resolveWorkerFile(from: string | undefined, name: string): URL {
+  const base = from ?? here();
+  for (const candidate of [`./${name}.ts`, `./${name}.js`, `./${name}.mjs`, `./explore/${name}.js`]) {
+    const url = new URL(candidate, base);
+    if (existsSync(fileURLToPath(url))) return url;
+  }
+  throw new Error(`worker module ${name} not found next to ${base}`);
+}
+
+/** This module's URL, in ESM (import.meta.url) and in a CommonJS build (__filename). */
+function here(): string {
+  if (typeof __filename === 'string') return pathToFileURL(__filename).href;
+  return import.meta.url;
+}

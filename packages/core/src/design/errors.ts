@@ -118,9 +118,9 @@ export function showValue(value: unknown): string {
 
 /** One issue as one line: `bank.capacitance: "2 kV" is a voltage (V); expected a capacitance (F), e.g. 2200 uF`. */
 export function formatIssue(issue: InputIssue): string {
-  const where = issue.path || '(top level)';
-  const at = issue.line !== undefined ? ` (line ${issue.line}${issue.column !== undefined ? `, column ${issue.column}` : ''})` : '';
-  let s = `${where}${at}: ${issue.problem}; expected ${issue.expected}`;
+  const pos = issue.line !== undefined ? `line ${issue.line}${issue.column !== undefined ? `, column ${issue.column}` : ''}` : '';
+  const head = issue.path ? `${issue.path}${pos ? ` (${pos})` : ''}: ` : pos ? `${pos}: ` : '';
+  let s = `${head}${issue.problem}; expected ${issue.expected}`;
   if (issue.suggestion !== undefined) s += `. Did you mean ${JSON.stringify(issue.suggestion)}?`;
   return s;
 }

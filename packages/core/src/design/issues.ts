@@ -235,6 +235,21 @@ export function toInputIssues(issues: readonly z.core.$ZodIssue[], root: unknown
   return out;
 }
 
+function parentPath(p: string): string {
+  const m = /^(.*)\.[^.[\]]+$/.exec(p);
+  return m ? m[1]! : /^[^.[\]]+$/.test(p) ? '' : p;
+}
+
+/** Drop "missing X" when an unknown field in the same section is a typo of X (one problem, told once). */
+function dropShadowedMissing(issues: InputIssue[]): InputIssue[] {
+  const typoTargets = new Set(
+    issues
+      .filter((i) => i.code === 'design.unknown-field' && i.suggestion !== undefined)
+      .map((i) => joinPath(parentPath(i.path), i.suggestion!)),
+  );
+  return issues.filter((i) => !(i.code === 'design.missing-field' && typoTargets.has(i.path)));
+}
+
 /**
  * Parse `data` with `schema`; return the output or throw one `InputError` naming every problem.
  * `pathPrefix` prefixes reported paths (for a section parsed on its own), `file` names the source.
@@ -249,7 +264,7 @@ export function parseWithSchema<S extends z.ZodType>(
 ): z.output<S> {
   const r = schema.safeParse(data);
   if (r.success) return r.data;
-  const issues = toInputIssues(r.error.issues, schema, data);
+  const issues = dropShadowedMissing(toInputIssues(r.error.issues, schema, data));
   if (options.locate) {
     for (const i of issues) {
       const pos = options.locate(pathFromString(i.path));

@@ -169,7 +169,7 @@ export function num(options: NumOptions = {}) {
 
 /** A whole number >= 0 (or >= min). @example count({ min: 1 }).default(1) */
 export function count(options: Omit<NumOptions, 'integer'> = {}) {
-  return build('dimensionless', { nonNegative: true, ...options, integer: true });
+  return build('dimensionless', { ...(options.min === undefined ? { nonNegative: true } : {}), ...options, integer: true });
 }
 
 /** One of a fixed list of words. @example choice(['copper', 'aluminium'], 'conductor material').default('copper') */

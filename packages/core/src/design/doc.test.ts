@@ -1,0 +1,26 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { designFileMarkdown } from './doc.js';
+import { designJsonSchema } from './schema.js';
+import { DEFAULT_SOLVER } from '../model/station.js';
+
+describe('generated design documentation', () => {
+  it('docs/design-file.md is up to date (regenerate: pnpm tsx packages/core/scripts/design-doc.ts)', () => {
+    const path = fileURLToPath(new URL('../../../../docs/design-file.md', import.meta.url));
+    expect(readFileSync(path, 'utf8')).toBe(designFileMarkdown());
+  });
+  it('documents the solver defaults from DEFAULT_SOLVER (defined once)', () => {
+    const md = designFileMarkdown();
+    expect(md).toContain(`| \`maxSteps\` | whole number | ${DEFAULT_SOLVER.maxSteps} |`);
+    expect(md).toContain('| `initialTemperature` | temperature, °C (e.g. `40 degC`) | 20 °C |');
+  });
+  it('JSON Schema: top-level properties, required sections, defaults', () => {
+    const js = designJsonSchema() as { properties: Record<string, { properties?: Record<string, { default?: unknown }> }>; required: string[]; additionalProperties: boolean };
+    expect(Object.keys(js.properties)).toEqual(expect.arrayContaining(['name', 'bank', 'switch', 'freewheel', 'cable', 'coil', 'coupled', 'probes', 'solver']));
+    expect(js.required).toEqual(['bank', 'coil']);
+    expect(js.additionalProperties).toBe(false);
+    expect(js.properties.solver!.properties!.relTol!.default).toBe(DEFAULT_SOLVER.relTol);
+    expect(JSON.parse(JSON.stringify(js))).toEqual(js);
+  });
+});

@@ -1,0 +1,39 @@
+/**
+ * Design section `coil`: the fixture coil by its electrical values (L, R at 20 °C, field per
+ * ampere at the part) and its conductor (for R(T) and the adiabatic heating).
+ *
+ * A coil given by its geometry (turns, bore, conductor size) is another form of this section:
+ * add it as an alternative (e.g. z.union([coilSection, coilGeometrySection])) in schema.ts and
+ * extend coilToStation, or resolve it in a StationStep (design/to-station.ts).
+ */
+import type { z } from 'zod';
+import type { Coil } from '../../model/station.js';
+import { qty, section } from '../quantity-schema.js';
+import { checkThermal, resolveThermal, thermalFields } from './thermal.js';
+
+export const coilSection = section('Fixture coil: electrical values, conductor, and its field at the part.', {
+  inductance: qty('inductance', { positive: true, description: 'Self inductance L of the coil (in its fixture)' }),
+  resistance: qty('resistance', { positive: true, description: 'Resistance at 20 °C' }),
+  fieldPerAmpere: qty('fieldPerCurrent', { positive: true, description: 'Field at the part per ampere of coil current' }),
+  ...thermalFields('copper'),
+  conductorArea: qty('area', { positive: true, description: 'Cross-section of the conductor of one turn (IEC 60949 check)' }).optional(),
+  conductorLength: qty('length', { positive: true, description: 'Total conductor length' }).optional(),
+}).superRefine(checkThermal);
+
+export type CoilDesign = z.output<typeof coilSection>;
+
+export function coilToStation(c: CoilDesign): Coil {
+  const th = resolveThermal(c);
+  const coil: Coil = {
+    inductance_H: c.inductance,
+    resistance20_Ohm: c.resistance,
+    tempCoeff_perK: th.tempCoeff_perK,
+    heatCapacity_JpK: th.heatCapacity_JpK,
+    initialTemperature_C: c.initialTemperature,
+  };
+  if (c.conductor !== undefined) coil.conductor = c.conductor;
+  if (th.mass_kg !== undefined) coil.mass_kg = th.mass_kg;
+  if (c.conductorArea !== undefined) coil.conductorArea_m2 = c.conductorArea;
+  if (c.conductorLength !== undefined) coil.conductorLength_m = c.conductorLength;
+  return coil;
+}

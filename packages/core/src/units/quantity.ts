@@ -64,6 +64,8 @@ export const DIMENSIONS = {
   pressure: { label: 'a pressure or stress', unit: 'Pa', example: '50 MPa', exponents: [1, -1, -2, 0, 0] },
   currentRate: { label: 'a rate of current rise', unit: 'A/s', example: '200 A/us', exponents: [0, 0, -1, 1, 0] },
   i2t: { label: 'a current-squared time (I²t)', unit: 'A²s', example: '2e6 A^2 s', exponents: [0, 0, 1, 2, 0] },
+  thermalResistance: { label: 'a thermal resistance', unit: 'K/W', example: '0.8 K/W', exponents: [-1, -2, 3, 0, 1] },
+  heatTransferCoefficient: { label: 'a heat-transfer coefficient', unit: 'W/(m²·K)', example: '10 W/(m^2 K)', exponents: [1, 0, -3, 0, -1] },
 } as const satisfies Record<string, DimensionInfo>;
 
 export type Dimension = keyof typeof DIMENSIONS;

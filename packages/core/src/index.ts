@@ -30,3 +30,7 @@ export { buildYokeCoil, yokeCurrentBound } from './magnetics/yoke-coil.js';
 export type { YokeCoil, YokeCoilOptions } from './magnetics/yoke-coil.js';
 export { steadyCurrent, currentForField } from './analysis/steady-current.js';
 export type { DcSupply, SteadyCoil, CoilCooling, SteadyFieldLaw, SteadyCurrentResult, SteadyPoint } from './analysis/steady-current.js';
+export { simulateShot } from './solve/shot.js';
+export type { SimulateOptions } from './solve/shot.js';
+export { seriesRlcClosedForm, rlDecayWithDrop } from './analysis/closed-form.js';
+export type { SeriesRlcResponse, Damping } from './analysis/closed-form.js';

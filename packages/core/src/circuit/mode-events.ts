@@ -1,0 +1,125 @@
+/**
+ * Events of each conduction mode and the mode that follows each event (docs/model.md §3).
+ *
+ * Every event is a function g(y, dy) that is positive while the mode holds and crosses zero when
+ * a device changes state. The engine arms an event once g > 0 has been seen, and locates the
+ * crossing on the dense output on its triggered side (g ≤ 0), so the next mode starts just past
+ * the switching point and its own consistency conditions hold.
+ *
+ *   switch-off  (switch conducting)   g = sw·i_s                     current zero in the switch
+ *   diode-off   (diode conducting)    g = i_d = i_L − i_s            current zero in the diode
+ *   diode-on    (diode blocking)      g = u + V_F0                   diode forward voltage reaches V_F0
+ *                                     (u needs di/dt: evaluated from the state through f)
+ *   switch-on   (bidirectional, off)  g = V_T0 − |V_sw| (+ tiny)     switch voltage reaches its threshold
+ *   decayed     (any)                 g = W − 1e-12·½CV0²            W = magnetic energy, plus ½Cv² while
+ *                                                                    the switch conducts
+ *
+ * Device drops are constant while conducting and vanish in the next mode, so the right-hand side
+ * is smooth inside a phase and nothing chatters at a current zero.
+ */
+import type { CircuitRhs } from './circuit-rhs.js';
+import type { Mode } from './modes.js';
+import { IL, IS, V } from './state.js';
+
+export type EventReason = 'switch-off' | 'diode-off' | 'diode-on' | 'switch-on' | 'decayed';
+
+export interface ModeEvent {
+  reason: EventReason;
+  /** True for a current that reaches zero (its slope is the current's derivative). */
+  current: boolean;
+  g(y: Float64Array, dy: Float64Array): number;
+  /** For current events: dg/dt from the state derivative. */
+  slope?(y: Float64Array, dy: Float64Array): number;
+}
+
+/** Relative threshold of the `decayed` end condition (fraction of the stored energy). */
+export const DECAY_FRACTION = 1e-12;
+
+export function modeEvents(rhs: CircuitRhs, mode: Mode): ModeEvent[] {
+  const net = rhs.net;
+  const out: ModeEvent[] = [];
+  const sw = mode.sw;
+  if (sw !== 0) {
+    out.push({ reason: 'switch-off', current: true, g: (y) => sw * y[IS], slope: (_y, dy) => sw * dy[IS] });
+  }
+  if (net.diode) {
+    if (mode.diode) {
+      out.push({
+        reason: 'diode-off',
+        current: true,
+        g: (y) => y[IL] - y[IS],
+        slope: (_y, dy) => dy[IL] - dy[IS],
+      });
+    } else if (sw !== 0 || rhs.nLoops > 0) {
+      const vF0 = net.diode.vF0_V;
+      out.push({ reason: 'diode-on', current: false, g: (y, dy) => rhs.nodeVoltage(y, dy) + vF0 });
+    }
+  }
+  if (sw === 0 && net.switchKind === 'bidirectional') {
+    const hysteresis = 1e-9 * net.voltage_V;
+    const vT0 = net.vT0_V;
+    out.push({
+      reason: 'switch-on',
+      current: false,
+      g: (y, dy) => vT0 + hysteresis - Math.abs(rhs.switchVoltage(y, dy)),
+    });
+  }
+  const threshold = DECAY_FRACTION * net.storedEnergy_J;
+  const halfC = 0.5 * net.capacitance_F;
+  out.push({
+    reason: 'decayed',
+    current: false,
+    g: (y) => rhs.magneticEnergy(y) + (sw !== 0 ? halfC * y[V] * y[V] : 0) - threshold,
+  });
+  return out;
+}
+
+/**
+ * The mode after an event, with the state projected onto the new mode's constraints
+ * (a current that reached zero is set to exactly zero). `dy` is scratch space.
+ * Uses rhs (changes its mode) to evaluate the switch voltage where the choice depends on it.
+ */
+export function modeAfterEvent(rhs: CircuitRhs, mode: Mode, reason: EventReason, t: number, y: Float64Array, dy: Float64Array): Mode {
+  const net = rhs.net;
+  switch (reason) {
+    case 'switch-off': {
+      y[IS] = 0;
+      if (!mode.diode) y[IL] = 0;
+      const next: Mode = { sw: 0, diode: mode.diode };
+      if (net.switchKind === 'bidirectional' && rhs.setMode(next)) {
+        rhs.eval(t, y, dy);
+        const vs = rhs.switchVoltage(y, dy);
+        if (-mode.sw * vs > net.vT0_V) return { sw: mode.sw === 1 ? -1 : 1, diode: mode.diode };
+      }
+      return next;
+    }
+    case 'diode-on':
+      return { sw: mode.sw, diode: true };
+    case 'diode-off': {
+      if (mode.sw !== 0) y[IS] = y[IL];
+      else y[IL] = 0;
+      return { sw: mode.sw, diode: false };
+    }
+    case 'switch-on': {
+      rhs.setMode(mode);
+      rhs.eval(t, y, dy);
+      const vs = rhs.switchVoltage(y, dy);
+      return { sw: vs > 0 ? 1 : -1, diode: mode.diode };
+    }
+    default:
+      return mode;
+  }
+}
+
+/**
+ * A current event already violated at the start of a mode: the current is zero and the mode
+ * would drive it negative (e.g. a switch fired with V0 below V_T0). Returns the event, or null.
+ */
+export function violatedAtStart(events: ModeEvent[], y: Float64Array, dy: Float64Array): ModeEvent | null {
+  for (const e of events) {
+    if (!e.current || !e.slope) continue;
+    const g = e.g(y, dy);
+    if (g < 0 || (g === 0 && e.slope(y, dy) <= 0)) return e;
+  }
+  return null;
+}

@@ -1,0 +1,71 @@
+/**
+ * Extremum tracking on the dense output: the largest |q(t)| of a quantity over a shot, with its
+ * time, located where dq/dt changes sign inside a step (Brent's method on the slope evaluated
+ * from the interpolated state through the right-hand side), and checked at every step end and
+ * event point (where q may be largest at a boundary). A peak is therefore located to the event
+ * tolerance in time, not read off the largest sample.
+ */
+import { brentZero } from './brent.js';
+
+/** A quantity of the state and its time derivative. */
+export interface Quantity {
+  value(y: Float64Array, dy: Float64Array): number;
+  slope(y: Float64Array, dy: Float64Array): number;
+}
+
+/** Evaluates the interpolated state and its derivative at t (into y, dy). */
+export interface DenseProbe {
+  y: Float64Array;
+  dy: Float64Array;
+  at(t: number): void;
+}
+
+export class ExtremumTracker {
+  /** Largest |q| seen. */
+  maxAbs = 0;
+  /** q (signed) where |q| was largest. */
+  valueAtMax = 0;
+  /** Time of the largest |q|, s. */
+  time = 0;
+  private slopePrev = 0;
+  private readonly slopeAt: (t: number) => number;
+
+  constructor(
+    readonly q: Quantity,
+    private readonly probe: DenseProbe,
+    private readonly tol: number,
+  ) {
+    this.slopeAt = (t: number) => {
+      this.probe.at(t);
+      return this.q.slope(this.probe.y, this.probe.dy);
+    };
+  }
+
+  private consider(v: number, t: number): void {
+    const a = Math.abs(v);
+    if (a > this.maxAbs) {
+      this.maxAbs = a;
+      this.valueAtMax = v;
+      this.time = t;
+    }
+  }
+
+  /** At the start of a phase (state and derivative of the new mode). */
+  start(t: number, y: Float64Array, dy: Float64Array): void {
+    this.slopePrev = this.q.slope(y, dy);
+    this.consider(this.q.value(y, dy), t);
+  }
+
+  /** After the interval [ta, tb] (dense output valid there), with the state at tb. */
+  step(ta: number, tb: number, yb: Float64Array, dyb: Float64Array): void {
+    const sb = this.q.slope(yb, dyb);
+    const sa = this.slopePrev;
+    if ((sa > 0 && sb < 0) || (sa < 0 && sb > 0)) {
+      const tr = brentZero(this.slopeAt, ta, tb, sa, sb, this.tol);
+      this.probe.at(tr);
+      this.consider(this.q.value(this.probe.y, this.probe.dy), tr);
+    }
+    this.consider(this.q.value(yb, dyb), tb);
+    this.slopePrev = sb;
+  }
+}

@@ -1,0 +1,576 @@
+/**
+ * simulateShot: one capacitor discharge through switch, cable, coil and freewheel diode, with
+ * coupled shorted loops and adiabatic heating, from firing to the end of all currents.
+ *
+ * Method (docs/model.md):
+ * 1. The circuit (circuit/network.ts, circuit/circuit-rhs.ts) is integrated phase by phase; a
+ *    phase is a conduction mode of the switch and the diode (circuit/modes.ts).
+ * 2. Inside a phase an error-controlled integrator with dense output advances the state
+ *    (capacitor voltage, mesh and loop currents, temperature rises, loss and I²t integrals).
+ * 3. After every accepted step the mode's event functions (circuit/mode-events.ts) are checked
+ *    at the step end; a sign change is located on the dense output by Brent's method to
+ *    Station.solver.eventTol_s, on its triggered side, and the integration restarts from the
+ *    located state in the next mode (state projected onto the new constraints). Zero crossings
+ *    of the current slopes are located the same way for the peaks (solve/extrema.ts).
+ * 4. The shot ends when the coil is open and no loop carries current, when the stored energy
+ *    has decayed below 1e-12 of ½CV0², or at t_max.
+ * 5. Waveform samples (uniform grid plus every event) and the pulse-width level crossings are
+ *    read afterwards by replaying the logged steps (solve/step-log.ts) on the dense output.
+ *
+ * Energy balance (analysis/energy.ts) is checked on every shot; numerical trouble becomes a
+ * Warning in the result, never a throw.
+ */
+import { energyBalance, ENERGY_BALANCE_WARN } from '../analysis/energy.js';
+import { assembleFigures, widthAtLevel } from '../analysis/figures.js';
+import { CircuitRhs } from '../circuit/circuit-rhs.js';
+import { modeAfterEvent, modeEvents, violatedAtStart, DECAY_FRACTION, type ModeEvent } from '../circuit/mode-events.js';
+import { modeKind, phaseName, type Mode } from '../circuit/modes.js';
+import { buildNetwork } from '../circuit/network.js';
+import {
+  E_CABLE,
+  E_DIODE,
+  E_ESR,
+  E_SW,
+  I2T_D,
+  I2T_SW,
+  IL,
+  IS,
+  TH_COIL,
+  V,
+  loopCurrentIndex,
+  loopThetaIndex,
+} from '../circuit/state.js';
+import type { PhaseRecord, ShotResult, Waveform, Warning } from '../model/result.js';
+import { DEFAULT_SOLVER, type Station } from '../model/station.js';
+import { brentZero } from './brent.js';
+import { ExtremumTracker, type DenseProbe, type Quantity } from './extrema.js';
+import type { IntegrateOptions, Integrator, StepView } from './integrator.js';
+import { chooseIntegrator } from './choose-integrator.js';
+import { stateScales } from './scales.js';
+import { StepLog } from './step-log.js';
+
+export interface SimulateOptions {
+  /** Force an integrator (tests and cross-checks); otherwise chosen from Station.solver.method. */
+  integrator?: Integrator;
+}
+
+type EndReason = 'current-zero' | 'decayed' | 't-max' | 'step-limit' | 'step-too-small';
+
+export function simulateShot(station: Station, options: SimulateOptions = {}): ShotResult {
+  const wall0 = performance.now();
+  const settings = { ...DEFAULT_SOLVER, ...station.solver };
+  const net = buildNetwork(station);
+  const rhs = new CircuitRhs(net);
+  const N = rhs.size;
+  const nLoops = rhs.nLoops;
+  const scales = stateScales(rhs);
+  const integrator = options.integrator ?? chooseIntegrator(settings.method, rhs, scales);
+  const absTol = new Float64Array(N);
+  for (let i = 0; i < N; i++) absTol[i] = settings.absTol * scales.state[i];
+  const intOpts: IntegrateOptions = { relTol: settings.relTol, absTol, maxSteps: settings.maxSteps };
+  const eventTol = settings.eventTol_s;
+  const tMax = settings.tMax_s;
+  const E0 = net.storedEnergy_J;
+  const warnings: Warning[] = [];
+
+  const y = new Float64Array(N);
+  const dy = new Float64Array(N);
+  y[V] = net.voltage_V;
+
+  // ---- dense-output probe shared by events and trackers ------------------------------------
+  let view: StepView | null = null;
+  const probe: DenseProbe = {
+    y: new Float64Array(N),
+    dy: new Float64Array(N),
+    at(t: number) {
+      view!.dense(t, this.y);
+      rhs.eval(t, this.y, this.dy);
+    },
+  };
+
+  // ---- tracked quantities -------------------------------------------------------------------
+  const nl = net.coil.nonlinear;
+  const dI = 1e-6 * scales.current_A;
+  const fieldQuantity = (p: number): Quantity => {
+    const pr = net.probes[p];
+    const coilField = nl && p === 0 ? (i: number) => nl.fieldAtPart_Apm(i) : (i: number) => pr.coil_ApmPerA * i;
+    const coilSlope = nl && p === 0 ? (i: number) => (nl.fieldAtPart_Apm(i + dI) - nl.fieldAtPart_Apm(i - dI)) / (2 * dI) : () => pr.coil_ApmPerA;
+    return {
+      value(yy) {
+        let h = coilField(yy[IL]);
+        for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * yy[loopCurrentIndex(k)];
+        return h;
+      },
+      slope(yy, d) {
+        let h = coilSlope(yy[IL]) * d[IL];
+        for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * d[loopCurrentIndex(k)];
+        return h;
+      },
+    };
+  };
+  // d²i_s/dt² by a directional difference of f along f (exact for the linear part of f)
+  const jvY = new Float64Array(N);
+  const jvDy = new Float64Array(N);
+  const hJv = 1e-6 * scales.time_s;
+  const switchDidt: Quantity = {
+    value: (_yy, d) => d[IS],
+    slope(yy, d) {
+      if (rhs.mode.sw === 0) return 0;
+      for (let i = 0; i < N; i++) jvY[i] = yy[i] + hJv * d[i];
+      rhs.eval(0, jvY, jvDy);
+      return (jvDy[IS] - d[IS]) / hJv;
+    },
+  };
+  const coilTracker = new ExtremumTracker({ value: (yy) => yy[IL], slope: (_yy, d) => d[IL] }, probe, eventTol);
+  const switchTracker = new ExtremumTracker({ value: (yy) => yy[IS], slope: (_yy, d) => d[IS] }, probe, eventTol);
+  const diodeTracker = new ExtremumTracker(
+    { value: (yy) => yy[IL] - yy[IS], slope: (_yy, d) => d[IL] - d[IS] },
+    probe,
+    eventTol,
+  );
+  const didtTracker = new ExtremumTracker(switchDidt, probe, eventTol);
+  const probeTrackers = net.probes.map((_, p) => new ExtremumTracker(fieldQuantity(p), probe, eventTol));
+  const loopTrackers = net.loops.map(
+    (_, k) =>
+      new ExtremumTracker(
+        { value: (yy) => yy[loopCurrentIndex(k)], slope: (_yy, d) => d[loopCurrentIndex(k)] },
+        probe,
+        eventTol,
+      ),
+  );
+  const trackers = [coilTracker, switchTracker, diodeTracker, didtTracker, ...probeTrackers, ...loopTrackers];
+  let minCapV = net.voltage_V;
+
+  // ---- phase loop ------------------------------------------------------------------------------
+  const log = new StepLog(N);
+  const phases: PhaseRecord[] = [];
+  const phaseModes: Mode[] = [];
+  let mode: Mode = { sw: 1, diode: false };
+  let t = 0;
+  let endReason: EndReason = 'current-zero';
+  let steps = 0;
+  let rejected = 0;
+  let evaluations = 0;
+  let eventCount = 0;
+  let coilEnd_s = 0;
+
+  // per-phase observer state
+  let events: ModeEvent[] = [];
+  let armed: boolean[] = [];
+  let gPrev = new Float64Array(8);
+  let phaseIndex = 0;
+  let prevT = 0;
+  const prevY = new Float64Array(N);
+  let hitIndex = -1;
+  let hitT = 0;
+  const hitY = new Float64Array(N);
+  const hitDy = new Float64Array(N);
+  const lastY = new Float64Array(N);
+  let lastT = 0;
+  const gBuf = new Float64Array(8);
+
+  const observer = (s: StepView): boolean => {
+    view = s;
+    log.push(s.t0, s.t1, phaseIndex, prevY);
+    // events at the step end
+    let best = -1;
+    let bestT = Infinity;
+    for (let e = 0; e < events.length; e++) {
+      const g1 = events[e].g(s.y1, s.dy1);
+      gBuf[e] = g1;
+      if (armed[e] && g1 <= 0) {
+        const ev = events[e];
+        const gAt = (tt: number) => {
+          probe.at(tt);
+          return ev.g(probe.y, probe.dy);
+        };
+        const tr = brentZero(gAt, s.t0, s.t1, gPrev[e], g1, eventTol, 200, 'nonpositive');
+        if (tr < bestT) {
+          bestT = tr;
+          best = e;
+        }
+      }
+    }
+    if (best >= 0) {
+      probe.at(bestT);
+      hitY.set(probe.y);
+      hitDy.set(probe.dy);
+      hitT = bestT;
+      hitIndex = best;
+      for (const tr of trackers) tr.step(s.t0, bestT, hitY, hitDy);
+      if (hitY[V] < minCapV) minCapV = hitY[V];
+      return false;
+    }
+    for (let e = 0; e < events.length; e++) {
+      gPrev[e] = gBuf[e];
+      if (gBuf[e] > 0) armed[e] = true;
+    }
+    for (const tr of trackers) tr.step(s.t0, s.t1, s.y1, s.dy1);
+    if (s.y1[V] < minCapV) minCapV = s.y1[V];
+    prevY.set(s.y1);
+    prevT = s.t1;
+    lastY.set(s.y1);
+    lastT = s.t1;
+    return true;
+  };
+
+  for (;;) {
+    // settle the mode: apply any current event already violated at the start
+    let finished = false;
+    for (let guard = 0; ; guard++) {
+      if (modeKind(mode) === 'open' && nLoops === 0) {
+        finished = true;
+        break;
+      }
+      if (!rhs.setMode(mode)) {
+        // zero inductance and zero resistance between switch and diode: the commutation is
+        // instantaneous; the switch current drops to zero at once (no energy is stored there)
+        warnings.push({
+          code: 'circuit.instant-commutation',
+          message:
+            'No inductance and no resistance between the switch and the freewheel diode: the commutation was taken as instantaneous.',
+          severity: 'info',
+        });
+        y[IS] = 0;
+        mode = { sw: 0, diode: true };
+        continue;
+      }
+      events = modeEvents(rhs, mode);
+      rhs.eval(t, y, dy);
+      const bad = guard < 8 ? violatedAtStart(events, y, dy) : null;
+      if (!bad) break;
+      mode = modeAfterEvent(rhs, mode, bad.reason, t, y, dy);
+    }
+    if (finished) break;
+    rhs.setMode(mode);
+    rhs.eval(t, y, dy);
+    phaseIndex = phases.length;
+    phases.push({ name: phaseName(mode), start_s: t, end_s: t, endReason: '' });
+    phaseModes.push(mode);
+    if (gPrev.length < events.length) gPrev = new Float64Array(events.length);
+    armed = events.map((e, i) => {
+      const g0 = e.g(y, dy);
+      gPrev[i] = g0;
+      return g0 > 0;
+    });
+    for (const tr of trackers) tr.start(t, y, dy);
+    prevT = t;
+    prevY.set(y);
+    lastY.set(y);
+    lastT = t;
+    hitIndex = -1;
+    if (t >= tMax) {
+      phases[phaseIndex].endReason = 't-max';
+      endReason = 't-max';
+      break;
+    }
+    const res = integrator.integrate(rhs.eval, t, y, tMax, observer, intOpts);
+    steps += res.steps;
+    rejected += res.rejected;
+    evaluations += res.evaluations;
+    const conducting = modeKind(mode) !== 'open';
+    if (res.outcome === 'stopped' && hitIndex >= 0) {
+      eventCount++;
+      t = hitT;
+      y.set(hitY);
+      const reason = events[hitIndex].reason;
+      phases[phaseIndex].end_s = t;
+      if (conducting) coilEnd_s = t;
+      if (reason === 'decayed') {
+        phases[phaseIndex].endReason = 'decayed';
+        endReason = 'decayed';
+        break;
+      }
+      const next = modeAfterEvent(rhs, mode, reason, t, y, dy);
+      phases[phaseIndex].endReason =
+        reason === 'switch-off' && modeKind(next) === 'open' ? 'current-zero' : reason;
+      mode = next;
+      continue;
+    }
+    // ran to t_max, or the integrator gave up
+    t = lastT;
+    y.set(lastY);
+    phases[phaseIndex].end_s = t;
+    if (conducting) coilEnd_s = t;
+    endReason = res.outcome === 'step-limit' ? 'step-limit' : res.outcome === 'step-too-small' ? 'step-too-small' : 't-max';
+    phases[phaseIndex].endReason = endReason;
+    break;
+  }
+  const tEnd = t;
+  if (phases.length > 0 && endReason === 'current-zero') coilEnd_s = phases[phases.length - 1].end_s;
+
+  // ---- warnings on how the shot ended ------------------------------------------------------------
+  rhs.eval(tEnd, y, dy);
+  const activeEnergy = rhs.magneticEnergy(y);
+  if (endReason === 't-max' && activeEnergy > DECAY_FRACTION * E0) {
+    warnings.push({
+      code: 'solver.t-max',
+      message: `The shot reached t_max = ${tMax} s with current still flowing (stored magnetic energy ${activeEnergy.toPrecision(3)} J).`,
+      severity: 'warning',
+    });
+  }
+  if (endReason === 'step-limit') {
+    warnings.push({
+      code: 'solver.step-limit',
+      message: `The integrator reached its step limit (${settings.maxSteps} steps in one phase) at t = ${tEnd.toPrecision(4)} s; the shot is incomplete.`,
+      severity: 'error',
+    });
+  }
+  if (endReason === 'step-too-small') {
+    warnings.push({
+      code: 'solver.tolerance',
+      message: `The integrator could not meet the tolerance (step size underflow) at t = ${tEnd.toPrecision(4)} s; the shot is incomplete.`,
+      severity: 'error',
+    });
+  }
+
+  // ---- replay of logged steps -------------------------------------------------------------------
+  let replayMode = -1;
+  const replayY0 = new Float64Array(N);
+  const replay = (k: number, onStep: (s: StepView) => void): void => {
+    const ph = log.phase[k];
+    if (ph !== replayMode) {
+      rhs.setMode(phaseModes[ph]);
+      replayMode = ph;
+    }
+    replayY0.set(log.startState(k));
+    const t0 = log.t0[k];
+    const t1 = log.t1[k];
+    integrator.integrate(
+      rhs.eval,
+      t0,
+      replayY0,
+      t1,
+      (s) => {
+        onStep(s);
+        return true;
+      },
+      { ...intOpts, initialStep: t1 - t0 },
+    );
+  };
+  const stepEnd = (k: number): number => (k + 1 < log.count ? log.t0[k + 1] : tEnd);
+
+  // ---- pulse widths by level crossings of the coil current -------------------------------------
+  const sgn = coilTracker.valueAtMax < 0 ? -1 : 1;
+  const tPk = coilTracker.time;
+  const ilAtStart = (k: number) => sgn * log.startValue(k, IL);
+  const crossingIn = (k: number, level: number, ta: number, tb: number): number => {
+    let found = Number.NaN;
+    const tmp = new Float64Array(N);
+    replay(k, (s) => {
+      if (!Number.isNaN(found)) return;
+      const a = Math.max(s.t0, ta);
+      const b = Math.min(s.t1, tb);
+      if (!(b > a)) return;
+      const f = (tt: number) => {
+        s.dense(tt, tmp);
+        return sgn * tmp[IL] - level;
+      };
+      const fa = f(a);
+      const fb = f(b);
+      if (fa * fb <= 0) found = brentZero(f, a, b, fa, fb, eventTol);
+    });
+    return found;
+  };
+  const crossing = (level: number, side: 'rise' | 'fall'): number => {
+    if (log.count === 0) return Number.NaN;
+    if (side === 'rise') {
+      let k = -1;
+      for (let j = 0; j < log.count && log.t0[j] < tPk; j++) if (ilAtStart(j) < level) k = j;
+      if (k < 0) return Number.NaN;
+      const tb = Math.min(stepEnd(k), tPk);
+      const tc = crossingIn(k, level, log.t0[k], tb);
+      return Number.isNaN(tc) ? log.t0[k] : tc;
+    }
+    for (let j = 0; j < log.count; j++) {
+      if (log.t0[j] > tPk && ilAtStart(j) < level) {
+        const k = Math.max(0, j - 1);
+        const ta = Math.max(log.t0[k], tPk);
+        const tc = crossingIn(k, level, ta, log.t0[j]);
+        return Number.isNaN(tc) ? log.t0[j] : tc;
+      }
+    }
+    if (sgn * y[IL] < level) {
+      const k = log.count - 1;
+      const ta = Math.max(log.t0[k], tPk);
+      const tc = crossingIn(k, level, ta, tEnd);
+      return Number.isNaN(tc) ? tEnd : tc;
+    }
+    return Number.NaN;
+  };
+  const peakAbs = coilTracker.maxAbs;
+  const fwhm = widthAtLevel(peakAbs, 0.5, crossing, tEnd);
+  const t90 = widthAtLevel(peakAbs, 0.9, crossing, tEnd);
+
+  // ---- energy balance ---------------------------------------------------------------------------
+  const loopsJ = net.loops.map((l, k) => l.heatCapacity_JpK * y[loopThetaIndex(nLoops, k)]);
+  const energy = energyBalance({
+    initial_J: E0,
+    capacitorFinal_J: 0.5 * net.capacitance_F * y[V] * y[V],
+    inductorFinal_J: activeEnergy,
+    esr_J: y[E_ESR],
+    switch_J: y[E_SW],
+    cable_J: y[E_CABLE],
+    coil_J: net.coil.heatCapacity_JpK * y[TH_COIL],
+    diode_J: y[E_DIODE],
+    loops_J: loopsJ,
+  });
+  if (energy.relativeError > ENERGY_BALANCE_WARN) {
+    warnings.push({
+      code: 'energy.balance',
+      message: `The energy balance closes only to ${energy.relativeError.toExponential(2)} of the stored energy (limit ${ENERGY_BALANCE_WARN}).`,
+      severity: 'warning',
+    });
+  }
+
+  // ---- waveform ---------------------------------------------------------------------------------
+  const waveform = sampleWaveform(settings.samples, tEnd, y, phases, log, stepEnd, replay, net, N);
+
+  const { figures, nonFinite } = assembleFigures({
+    peakCurrent_A: coilTracker.valueAtMax,
+    timeOfPeak_s: coilTracker.time,
+    pulseWidthHalfMax_s: fwhm,
+    timeAbove90pct_s: t90,
+    endOfPulse_s: endReason === 't-max' ? tMax : coilEnd_s,
+    peakField_Apm: probeTrackers.length > 0 ? probeTrackers[0].valueAtMax : 0,
+    timeOfPeakField_s: probeTrackers.length > 0 ? probeTrackers[0].time : 0,
+    chargeVoltage_V: net.voltage_V,
+    finalCapacitorVoltage_V: y[V],
+    minCapacitorVoltage_V: minCapV,
+    i2tSwitch_A2s: y[I2T_SW],
+    i2tDiode_A2s: y[I2T_D],
+    peakSwitchCurrent_A: switchTracker.maxAbs,
+    peakDiodeCurrent_A: diodeTracker.maxAbs,
+    peakDidt_Aps: didtTracker.maxAbs,
+    coilTemperatureRise_K: y[TH_COIL],
+    coilInitialTemperature_C: net.coil.initialTemperature_C,
+    storedEnergy_J: E0,
+    energyBalanceRelativeError: energy.relativeError,
+  });
+  if (nonFinite.length > 0) {
+    warnings.push({
+      code: 'solver.non-finite',
+      message: `Some figures were not finite and were set to 0: ${nonFinite.join(', ')}.`,
+      severity: 'error',
+    });
+  }
+
+  return {
+    figures,
+    phases,
+    energy,
+    loops: net.loops.map((l, k) => ({
+      name: l.name,
+      peakCurrent_A: loopTrackers[k].maxAbs,
+      temperatureRise_K: y[loopThetaIndex(nLoops, k)],
+      finalTemperature_C: l.initialTemperature_C + y[loopThetaIndex(nLoops, k)],
+    })),
+    probes: net.probes.map((p, i) => ({
+      name: p.name,
+      peakField_Apm: probeTrackers[i].maxAbs,
+      timeOfPeak_s: probeTrackers[i].time,
+    })),
+    waveform,
+    solver: {
+      method: integrator.name,
+      steps,
+      rejectedSteps: rejected,
+      functionEvaluations: evaluations,
+      events: eventCount,
+      relTol: settings.relTol,
+      absTol: settings.absTol,
+      wallTime_s: (performance.now() - wall0) / 1000,
+    },
+    warnings,
+  };
+}
+
+/**
+ * Waveform on a uniform grid of `samples` points over [0, t_end] plus every phase boundary,
+ * read from the dense output of the replayed steps.
+ */
+function sampleWaveform(
+  samples: number,
+  tEnd: number,
+  yEnd: Float64Array,
+  phases: PhaseRecord[],
+  log: StepLog,
+  stepEnd: (k: number) => number,
+  replay: (k: number, onStep: (s: StepView) => void) => void,
+  net: ReturnType<typeof buildNetwork>,
+  N: number,
+): Waveform {
+  const nLoops = net.loops.length;
+  const wf: Waveform = {
+    t_s: [],
+    capacitorVoltage_V: [],
+    coilCurrent_A: [],
+    switchCurrent_A: [],
+    diodeCurrent_A: [],
+    loopCurrents_A: net.loops.map(() => []),
+    field_Apm: net.probes.map(() => []),
+    coilTemperature_C: [],
+    loopTemperatures_C: net.loops.map(() => []),
+  };
+  if (!(samples > 0)) return wf;
+  const times: number[] = [];
+  if (samples === 1) times.push(tEnd);
+  else for (let j = 0; j < samples; j++) times.push((tEnd * j) / (samples - 1));
+  for (const p of phases) times.push(p.start_s);
+  times.sort((a, b) => a - b);
+  const uniq: number[] = [];
+  for (const tt of times) if (uniq.length === 0 || tt > uniq[uniq.length - 1]) uniq.push(tt);
+
+  const nl = net.coil.nonlinear;
+  const push = (tt: number, s: Float64Array) => {
+    wf.t_s.push(tt);
+    wf.capacitorVoltage_V.push(s[V]);
+    wf.coilCurrent_A.push(s[IL]);
+    wf.switchCurrent_A.push(s[IS]);
+    wf.diodeCurrent_A.push(net.diode ? s[IL] - s[IS] : 0);
+    for (let k = 0; k < nLoops; k++) {
+      wf.loopCurrents_A[k].push(s[loopCurrentIndex(k)]);
+      wf.loopTemperatures_C[k].push(net.loops[k].initialTemperature_C + s[loopThetaIndex(nLoops, k)]);
+    }
+    for (let p = 0; p < net.probes.length; p++) {
+      const pr = net.probes[p];
+      let h = nl && p === 0 ? nl.fieldAtPart_Apm(s[IL]) : pr.coil_ApmPerA * s[IL];
+      for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * s[loopCurrentIndex(k)];
+      wf.field_Apm[p].push(h);
+    }
+    wf.coilTemperature_C.push(net.coil.initialTemperature_C + s[TH_COIL]);
+  };
+
+  const tmp = new Float64Array(N);
+  let j = 0;
+  for (let k = 0; k < log.count && j < uniq.length; k++) {
+    const a = log.t0[k];
+    const b = stepEnd(k);
+    if (uniq[j] >= b && k + 1 < log.count) continue;
+    const first = j;
+    let last = j;
+    while (last < uniq.length && uniq[last] < b) last++;
+    if (last === first) continue;
+    // points in [a, b) of step k
+    let next = first;
+    replay(k, (s) => {
+      while (next < last && uniq[next] <= s.t1) {
+        const tt = Math.max(uniq[next], a);
+        s.dense(tt, tmp);
+        push(uniq[next], tmp);
+        next++;
+      }
+    });
+    // anything the replay did not reach (it should not happen): use the step's start state
+    while (next < last) {
+      push(uniq[next], log.startState(k));
+      next++;
+    }
+    j = last;
+  }
+  while (j < uniq.length) {
+    push(uniq[j], yEnd);
+    j++;
+  }
+  return wf;
+}

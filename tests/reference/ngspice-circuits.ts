@@ -167,3 +167,53 @@ export function seriesTotals(station: Station): { R_Ohm: number; L_H: number } {
     L_H: station.bank.esl_H + station.cable.inductance_H + station.coil.inductance_H,
   };
 }
+
+/**
+ * Eight (or `count`) coupled loops for the engine checks and benchmarks: a conductive cylindrical part of radius
+ * `partRadius_m` inside the coil, cut into `count` concentric shells of equal thickness, all of the coil's length.
+ * Long-solenoid approximation (each shell a one-turn solenoid of its mean radius r_k, coil of N turns at radius R_c):
+ *   L_k = µ0·π·r_k²/ℓ, M_jk = µ0·π·min(r_j, r_k)²/ℓ, M_1k = N·µ0·π·r_k²/ℓ, R_k = ρ·2π·r_k/(ℓ·Δr),
+ *   field at the part centre per ampere: coil N/ℓ, each shell 1/ℓ.
+ * The matrix is positive definite when R_c > every r_k (distinct radii). The numbers are invented; the
+ * approximation only has to give a consistent, physical-looking coupled network (oracles are ngspice and
+ * conservation, not these values).
+ */
+export function eddyShellLoops(opts: {
+  count?: number;
+  coilInductance_H?: number;
+  coilRadius_m?: number;
+  length_m?: number;
+  partRadius_m?: number;
+  resistivity_OhmM?: number;
+} = {}): { coupled: Station['coupled']; loopMutual_H: number[][]; coilField_ApmPerA: number; loopField_ApmPerA: number[] } {
+  const mu0 = 4e-7 * Math.PI;
+  const count = opts.count ?? 8;
+  const L1 = opts.coilInductance_H ?? 180e-6;
+  const Rc = opts.coilRadius_m ?? 0.03;
+  const len = opts.length_m ?? 0.05;
+  const a = opts.partRadius_m ?? 0.02;
+  const rho = opts.resistivity_OhmM ?? 1.5e-6; // sintered NdFeB, 1.4–1.6 µΩ·m (REFERENCES.md, typical)
+  const perTurn2 = (mu0 * Math.PI * Rc * Rc) / len;
+  const N = Math.sqrt(L1 / perTurn2);
+  const dr = a / count;
+  const radii = Array.from({ length: count }, (_, k) => (k + 0.5) * dr);
+  const coupled = radii.map((r, k) => ({
+    name: `part shell ${k + 1}`,
+    inductance_H: (mu0 * Math.PI * r * r) / len,
+    mutualToCoil_H: (N * mu0 * Math.PI * r * r) / len,
+    resistance20_Ohm: (rho * 2 * Math.PI * r) / (len * dr),
+    tempCoeff_perK: 0,
+    heatCapacity_JpK: 7500 * 440 * 2 * Math.PI * r * dr * len, // density 7500 kg/m³, 440 J/(kg·K), typical
+    initialTemperature_C: 20,
+  }));
+  const loopMutual_H = radii.map((rj, j) => radii.map((rk, k) => (j === k ? 0 : (mu0 * Math.PI * Math.min(rj, rk) ** 2) / len)));
+  return { coupled, loopMutual_H, coilField_ApmPerA: N / len, loopField_ApmPerA: radii.map(() => 1 / len) };
+}
+
+/** The magnetizer station with `count` eddy shells in the part (constant resistances), probe 0 at the part centre. */
+export function magnetizerWithShells(count = 8, overrides: Partial<StationSpec> = {}): Station {
+  const shells = eddyShellLoops({ count });
+  const st = magnetizerStation({ coupled: shells.coupled, loopMutual_H: shells.loopMutual_H, ...overrides });
+  st.probes = [{ name: 'part centre', coil_ApmPerA: shells.coilField_ApmPerA, loops_ApmPerA: shells.loopField_ApmPerA }];
+  return st;
+}

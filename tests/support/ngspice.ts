@@ -221,6 +221,8 @@ export interface NetlistOptions {
   relTol?: number;
   /** Snubber capacitance across switch and diode, F (default SNUBBER_C_F; 0: none, which fails at a device turn-off). */
   snubber_F?: number;
+  /** Integration method (default ngspice's trapezoidal rule). */
+  method?: 'trap' | 'gear';
 }
 
 /** Transient settings of a station deck. */
@@ -318,7 +320,7 @@ export function stationNetlist(station: Station, opts: NetlistOptions = {}): str
   // RELTOL 1e-6 (tight: the default is 1e-3). ABSTOL/VNTOL 1 µA / 1 µV: far below RELTOL of kA and kV signals;
   // tighter values (1e-9) make Newton fail at a diode turn-off ("timestep too small").
   const relTol = opts.relTol ?? 1e-6;
-  lines.push(`.options reltol=${n(relTol)} abstol=1e-6 vntol=1e-6 chgtol=1e-16 trtol=1`);
+  lines.push(`.options reltol=${n(relTol)} abstol=1e-6 vntol=1e-6 chgtol=1e-16 trtol=1 method=${opts.method ?? 'trap'}`);
   return lines;
 }
 
@@ -334,20 +336,27 @@ export function stationDeck(station: Station, opts: DeckOptions): string {
   lines.push('run');
   // Coil current i(Vcoil); switch current i(Vsw); diode current i(Vdio) (anode side, forward positive);
   // capacitor voltage v(cap).
-  lines.push(`wrdata ${opts.outFile ?? 'out.txt'} i(Vcoil) i(Vsw) i(Vdio) v(cap)`);
+  // Then the current of each coupled loop (branch current of Lloop<k>, in the coil's sign convention).
+  const loopVectors = station.coupled.map((_, k) => `lloop${k}#branch`).join(' ');
+  lines.push(`wrdata ${opts.outFile ?? 'out.txt'} i(Vcoil) i(Vsw) i(Vdio) v(cap) ${loopVectors}`.trimEnd());
   lines.push('quit');
   lines.push('.endc');
   lines.push('.end');
   return lines.join('\n') + '\n';
 }
 
-/** Traces of a station deck's run, keyed by STATION_VECTORS. */
-export function stationTraces(run: NgspiceRun, outFile = 'out.txt'): Record<(typeof STATION_VECTORS)[number], Trace> {
+/** Traces of a station deck's run: STATION_VECTORS, then one trace per coupled loop. */
+export type StationTraces = Record<(typeof STATION_VECTORS)[number], Trace> & { loops: Trace[] };
+
+/** Traces of a station deck's run (`loopCount`: number of coupled loops in the station). */
+export function stationTraces(run: NgspiceRun, loopCount = 0, outFile = 'out.txt'): StationTraces {
   const text = run.files[outFile];
   if (text === undefined) throw new NgspiceError(`ngspice wrote no ${outFile}`, run.stdout + run.stderr);
-  const blocks = wrdataTraces(text, [...STATION_VECTORS]);
+  const loopNames = Array.from({ length: loopCount }, (_, k) => `loop${k}`);
+  const blocks = wrdataTraces(text, [...STATION_VECTORS, ...loopNames]);
   if (blocks.length !== 1) throw new Error(`expected one analysis in ${outFile}, found ${blocks.length}`);
-  return blocks[0] as Record<(typeof STATION_VECTORS)[number], Trace>;
+  const b = blocks[0];
+  return { coil: b.coil, switch: b.switch, diode: b.diode, vcap: b.vcap, loops: loopNames.map((n) => b[n]) };
 }
 
 /** One point of a capacitance sweep as ngspice computed it. */
@@ -419,4 +428,57 @@ export function parseSweep(stdout: string): SweepPoint[] {
     out[Number(m[1])] = { capacitance_F: c, peakCurrent_A: i, timeOfPeak_s: t };
   }
   return out;
+}
+
+/**
+ * Settings tried in turn by runStation. The sidiode's sharp knee can make Newton fail at a device turn-off with
+ * RELTOL 1e-6 in some circuits ("timestep too small"); RELTOL 1e-5, then Gear's method, get through. With a
+ * largest step of a 2000th of the pulse the step size, not RELTOL, sets the accuracy: in the checks the peak
+ * current moved by less than 1e-6 between these settings (docs/reference-checks.md).
+ */
+export const FALLBACK_SETTINGS: readonly { relTol: number; method: 'trap' | 'gear' }[] = [
+  { relTol: 1e-6, method: 'trap' },
+  { relTol: 1e-5, method: 'trap' },
+  { relTol: 1e-6, method: 'gear' },
+];
+
+/** Run a station deck with the first of FALLBACK_SETTINGS that completes; returns the traces and the settings used. */
+export function runStation(
+  station: Station,
+  opts: Omit<DeckOptions, 'relTol' | 'method'>,
+): { traces: StationTraces; run: NgspiceRun; settings: { relTol: number; method: 'trap' | 'gear' } } {
+  let last: unknown;
+  for (const settings of FALLBACK_SETTINGS) {
+    try {
+      const run = runNgspice(stationDeck(station, { ...opts, ...settings }));
+      return { traces: stationTraces(run, station.coupled.length, opts.outFile), run, settings };
+    } catch (e) {
+      if (!(e instanceof NgspiceError) || !/timestep too small/i.test(e.log)) throw e;
+      last = e;
+    }
+  }
+  throw last;
+}
+
+/** Times where a trace crosses `level` (linear interpolation between samples); `dir` picks falling or rising crossings. */
+export function crossings(trace: Trace, level: number, dir: 'falling' | 'rising' | 'both' = 'both'): number[] {
+  const out: number[] = [];
+  const { t_s, y } = trace;
+  for (let j = 1; j < y.length; j++) {
+    const a = y[j - 1] - level;
+    const b = y[j] - level;
+    const falling = a > 0 && b <= 0;
+    const rising = a < 0 && b >= 0;
+    if ((falling && dir !== 'rising') || (rising && dir !== 'falling')) {
+      out.push(t_s[j - 1] + ((t_s[j] - t_s[j - 1]) * a) / (a - b));
+    }
+  }
+  return out;
+}
+
+/** ∫ f(y) dt over a trace by the trapezoidal rule. */
+export function integrate(trace: Trace, f: (y: number) => number = (y) => y): number {
+  let s = 0;
+  for (let j = 1; j < trace.t_s.length; j++) s += 0.5 * (f(trace.y[j]) + f(trace.y[j - 1])) * (trace.t_s[j] - trace.t_s[j - 1]);
+  return s;
 }

@@ -14,7 +14,7 @@
  * Other figures carry their own tolerance and reason beside each check.
  */
 import { beforeAll, describe, expect, test } from 'vitest';
-import { simulateShot } from '../../packages/core/src/solve/shot.js';
+import { simulateShot } from '@fluxkick/core';
 import type { ShotResult, Station } from '@fluxkick/core';
 import { crossings, integrate, ngspiceStatus, refinedPeak, runStation, sampleAt, type StationTraces, type Trace } from '../support/ngspice.js';
 import { magnetizerStation, magnetizerWithShells } from './ngspice-circuits.js';

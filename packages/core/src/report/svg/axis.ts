@@ -45,7 +45,8 @@ export function leftAxis(y: ScaleLinear<number, number>, spec: AxisSpec, x0: num
     parts.push(el('line', { x1: x0 - 4, x2: x0, y1: yy, y2: yy, stroke: INK }));
     parts.push(text(x0 - 6, yy + 3.5, tickLabel(t, factor), { 'text-anchor': 'end', fill: INK }));
   }
-  const [r0, r1] = y.range();
+  const r = y.range();
+  const [r0, r1] = [r[0], r[r.length - 1]];
   parts.push(el('line', { x1: x0, x2: x0, y1: r0, y2: r1, stroke: INK }));
   const ym = (r0 + r1) / 2;
   parts.push(
@@ -81,7 +82,8 @@ export function bottomAxis(
       parts.push(text(xx, y0 + 16, tickLabel(t, factor), { 'text-anchor': 'middle', fill: INK }));
     }
   }
-  const [r0, r1] = x.range();
+  const r = x.range();
+  const [r0, r1] = [r[0], r[r.length - 1]];
   parts.push(el('line', { x1: r0, x2: r1, y1: y0, y2: y0, stroke: INK }));
   if (labels) parts.push(text((r0 + r1) / 2, y0 + 34, axisTitle(spec, x.domain()), { 'text-anchor': 'middle', fill: MUTED }));
   return el('g', { class: 'axis axis-x' }, parts);

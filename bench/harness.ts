@@ -58,14 +58,19 @@ export interface Timing {
 }
 
 /**
- * Time a synchronous function: `warmup` untimed calls, then batches of calls until `minTime_s` has passed and at
- * least `minRuns` calls ran. Returns the median over batches (batches of `batch` calls).
+ * Time a synchronous function: untimed warm-up calls (at least `warmup` calls and `warmup_s` seconds, so that the
+ * JavaScript engine has compiled the hot code), then batches of calls until `minTime_s` has passed and at least
+ * `minRuns` calls ran. Returns the median over batches (batches of `batch` calls).
  */
-export function timeIt(fn: () => unknown, opts: { minTime_s?: number; minRuns?: number; warmup?: number; batch?: number } = {}): Timing {
+export function timeIt(
+  fn: () => unknown,
+  opts: { minTime_s?: number; minRuns?: number; warmup?: number; warmup_s?: number; batch?: number } = {},
+): Timing {
   const minTime_s = opts.minTime_s ?? 1;
   const minRuns = opts.minRuns ?? 10;
   const batch = Math.max(1, opts.batch ?? 1);
-  for (let k = 0; k < (opts.warmup ?? 3); k++) fn();
+  const w0 = performance.now();
+  for (let k = 0; k < (opts.warmup ?? 3) || (performance.now() - w0) / 1000 < (opts.warmup_s ?? 0.5); k++) fn();
   const batchMeans: number[] = [];
   let runs = 0;
   let total = 0;

@@ -14,8 +14,9 @@
  *   a resistor roff (1e9 Ω here: 1.6 µA of leakage at 1.6 kV). It conducts forward only and stops at current zero,
  *   like a thyristor. Unlike a thyristor it would conduct again if its forward voltage later exceeded V_T0 without
  *   a new gate pulse; callers check the switch current stays zero after its first zero so that this never happened.
- *   sidiode needs ron > 0: a zero slope resistance is replaced by MIN_RON_OHM (1 nΩ, a relative change of the loop
- *   resistance below 1e-6 for any loop of at least 1 mΩ).
+ *   sidiode needs ron > 0 (and with ron = 1 nΩ ngspice stops at the first step, "timestep too small"): a zero slope
+ *   resistance is replaced by MIN_RON_OHM = 1 µΩ, a relative change of the loop resistance of 3e-5 for a 32 mΩ loop,
+ *   which moves the peak current by about α·t_p·ΔR/R < 1e-5. Give the switch a real r_T when comparing tightly.
  *   RC snubbers (Cs = 1 nF, Rs = 2·√(L_loop/Cs), critical damping of the loop the device interrupts) sit across the
  *   switch and across the diode. Without them ngspice cannot turn a device off: at current zero the loop inductance
  *   meets roff (1e9 Ω), a time constant of femtoseconds, and the run stops with "timestep too small". Real
@@ -33,7 +34,7 @@ import { performance } from 'node:perf_hooks';
 import type { Station } from '../../packages/core/src/model/station.js';
 
 /** Smallest `ron` given to sidiode, Ω (the model needs ron > 0). */
-export const MIN_RON_OHM = 1e-9;
+export const MIN_RON_OHM = 1e-6;
 /** Off-state resistance of the switch and the diode in the deck, Ω. */
 export const ROFF_OHM = 1e9;
 /** Capacitance of the RC snubbers across the switch and the freewheel diode in the deck, F (needed at turn-off; see header). */

@@ -57,7 +57,10 @@ export function allElements(node: XmlElement): XmlElement[] {
   return node.children.flatMap((c) => [c, ...allElements(c)]);
 }
 
-/** Text of an element and its descendants. */
+/** Text of an element and its descendants, with the five XML entities decoded. */
+function rawText(node: XmlElement): string {
+  return node.text + node.children.map(rawText).join('');
+}
 export function textOf(node: XmlElement): string {
-  return node.text + node.children.map(textOf).join('');
+  return rawText(node).replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&apos;/g, "'").replace(/&amp;/g, '&');
 }

@@ -65,7 +65,13 @@ function describeKind(v: unknown): string {
  * Throws InputError (code `option.invalid`, naming the option and its value) when the path
  * does not exist, with the nearest existing field as a suggestion.
  */
-export function readDesignPath(design: unknown, pathText: string, source: OptionSource): { path: DesignPath; value: number | string } {
+export function readDesignPath(
+  design: unknown,
+  pathText: string,
+  source: OptionSource,
+  /** When given and true for the path, a missing last field is accepted (value undefined): e.g. an optional field the schema knows. */
+  mayBeAbsent?: (path: DesignPath) => boolean,
+): { path: DesignPath; value: number | string | undefined } {
   const path = parseDesignPath(pathText);
   if (!path) throw optionError(source, `"${pathText}" is not a dotted path`);
   let node: unknown = design;
@@ -84,7 +90,8 @@ export function readDesignPath(design: unknown, pathText: string, source: Option
         throw optionError(source, `${pathToString(walked) || 'the design'} is ${describeKind(node)}, so it has no field "${seg}"`);
       }
       const record = node as Record<string, unknown>;
-      if (!Object.prototype.hasOwnProperty.call(record, seg)) {
+      if (!Object.prototype.hasOwnProperty.call(record, seg) || record[seg] === undefined) {
+        if (walked.length === path.segments.length - 1 && mayBeAbsent?.(path)) return { path, value: undefined };
         const keys = Object.keys(record);
         const nearest = keys.map((k) => ({ k, d: distance(k.toLowerCase(), seg.toLowerCase()) })).sort((a, b) => a.d - b.d)[0];
         const here = pathToString(walked);

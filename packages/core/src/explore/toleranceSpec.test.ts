@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { isInputError } from '../design/errors.js';
 import { parseToleranceSpec, resolveTolerance } from './toleranceSpec.js';
+import { fixtureDesign } from './__fixtures__/design.js';
 
 describe('parseToleranceSpec(text)', () => {
   it('reads ±x%, +-x% and +/-x%', () => {
@@ -41,10 +42,11 @@ describe('parseToleranceSpec(text)', () => {
 });
 
 describe('resolveTolerance(spec, design)', () => {
-  it('takes the nominal value from the design, in SI', () => {
-    const design = { bank: { capacitance: '2200 uF', voltage: 1600 } };
+  it('takes the nominal value from the parsed design, in SI', () => {
+    const design = fixtureDesign();
     expect(resolveTolerance(parseToleranceSpec('bank.capacitance=±10%'), design)).toMatchObject({ nominal: 2.2e-3, fraction: 0.1 });
     expect(resolveTolerance(parseToleranceSpec('bank.voltage=±1%'), design).nominal).toBe(1600);
-    expect(() => resolveTolerance(parseToleranceSpec('bank.esr=±1%'), design)).toThrow(/no field "esr"/);
+    expect(() => resolveTolerance(parseToleranceSpec('bank.esrr=±1%'), design)).toThrow(/no field "esrr"/);
+    expect(() => resolveTolerance(parseToleranceSpec('coil.conductorArea=±1%'), design)).toThrow(/not set in the design/);
   });
 });

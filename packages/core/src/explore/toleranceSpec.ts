@@ -5,9 +5,9 @@
  * for the distributions).
  */
 import { InputError } from '../design/errors.js';
-import { tryParseQuantity, type Dimension } from '../units/quantity.js';
-import { readDesignPath, type DesignPath, type OptionSource } from './designPath.js';
-import { inferDimension } from './inferDimension.js';
+import type { DesignPath, OptionSource } from './designPath.js';
+import type { DesignFieldInfo } from './designField.js';
+import { resolveField } from './resolveField.js';
 
 export interface ToleranceSpec {
   text: string;
@@ -57,17 +57,11 @@ export function parseToleranceSpec(text: string): ToleranceSpec {
   return { text, pathText, fraction };
 }
 
-/** Resolve a tolerance against the design: the path must exist and hold a number or a quantity. */
-export function resolveTolerance(
-  spec: ToleranceSpec,
-  design: unknown,
-  dimensionOf: (path: DesignPath, current: number | string) => Dimension | undefined = (_p, current) => inferDimension(current),
-): ToleranceField {
+/** Resolve a tolerance against a parsed design: the path must be a numeric field that is set. */
+export function resolveTolerance(spec: ToleranceSpec, design: unknown, fieldInfo?: (segments: readonly (string | number)[]) => DesignFieldInfo): ToleranceField {
   const source: OptionSource = { option: '--tolerance', value: spec.text, expected: TOLERANCE_EXPECTED };
-  const { path, value } = readDesignPath(design, spec.pathText, source);
-  const dimension = dimensionOf(path, value);
-  const q = tryParseQuantity(value, dimension ?? 'dimensionless');
-  if (!q.ok) throw tolError(spec.text, `the design's value of ${path.text}, ${JSON.stringify(value)}, is not a number (${q.reason})`);
-  if (q.value === 0) throw tolError(spec.text, `${path.text} is 0 in the design, so a relative tolerance has no effect`);
-  return { path, nominal: q.value, fraction: spec.fraction, spec: spec.text };
+  const { path, current } = resolveField(design, spec.pathText, source, fieldInfo);
+  if (current === undefined) throw tolError(spec.text, `${path.text} is not set in the design, so it has no nominal value`);
+  if (current === 0) throw tolError(spec.text, `${path.text} is 0 in the design, so a relative tolerance has no effect`);
+  return { path, nominal: current, fraction: spec.fraction, spec: spec.text };
 }

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { isInputError, type InputError } from '../design/errors.js';
 import { linearValues, logValues, parseVarySpec, resolveVaryAxis } from './varySpec.js';
+import { fixtureDesign } from './__fixtures__/design.js';
 
-const design = { bank: { capacitance: '2200 uF', voltage: '1.6 kV', esr: 0.004 }, cable: { length: '3 m' } };
+const design = fixtureDesign();
 
 function inputError(f: () => unknown): InputError {
   try {
@@ -53,12 +54,17 @@ describe('linearValues / logValues', () => {
 });
 
 describe('resolveVaryAxis(spec, design)', () => {
-  it('parses values with the dimension of the field written in the design', () => {
+  it('parses values with the dimension the design schema gives the field', () => {
     expect(resolveVaryAxis(parseVarySpec('bank.capacitance=1m:3m:3'), design).values).toEqual([1e-3, 2e-3, 3e-3]);
     expect(resolveVaryAxis(parseVarySpec('bank.voltage=1k,1.5 kV,2000'), design)).toMatchObject({ values: [1000, 1500, 2000], dimension: 'voltage' });
     expect(resolveVaryAxis(parseVarySpec('bank.capacitance=log:1 mF:10 mF:3'), design).values[1]).toBeCloseTo(Math.sqrt(1e-5), 15);
-    expect(resolveVaryAxis(parseVarySpec('cable.length=1m,2m'), design).values).toEqual([1, 2]);
     expect(resolveVaryAxis(parseVarySpec('bank.esr=1m,2m'), design).values).toEqual([1e-3, 2e-3]);
+    expect(resolveVaryAxis(parseVarySpec('coil.initialTemperature=20 degC,313.15 K'), design).values).toEqual([20, 40]);
+    expect(resolveVaryAxis(parseVarySpec('coupled[0].resistance=0.1m:0.3m:3'), design).values).toEqual([1e-4, 2e-4, 3e-4]);
+  });
+
+  it('accepts an optional field the schema knows but the design leaves unset', () => {
+    expect(resolveVaryAxis(parseVarySpec('coil.conductorArea=10 mm^2,12 mm^2'), design).values).toEqual([1e-5, 1.2e-5]);
   });
 
   it('refuses a unit of the wrong dimension, naming the option, the value and the expected dimension', () => {
@@ -69,9 +75,9 @@ describe('resolveVaryAxis(spec, design)', () => {
     expect(err.message).toMatch(/voltage/);
   });
 
-  it('refuses an unknown field with a suggestion', () => {
-    const err = inputError(() => resolveVaryAxis(parseVarySpec('bank.volts=1k:2k:3'), design));
-    expect(err.suggestion).toBe('bank.voltage');
+  it('refuses an unknown field with a suggestion, and a field that is not a number', () => {
+    expect(inputError(() => resolveVaryAxis(parseVarySpec('bank.volts=1k:2k:3'), design)).suggestion).toBe('bank.voltage');
+    expect(inputError(() => resolveVaryAxis(parseVarySpec('switch.kind=1,2'), design)).message).toMatch(/not a numeric field/);
   });
 
   it('refuses log spacing through zero and equal ends with several points', () => {

@@ -8,16 +8,17 @@
  * PATH is a dotted path into the design file (`bank.capacitance`, `coupled[0].resistance`).
  * Values take units ("1.5 kV", "2.2mF"), bare SI prefixes ("1.5k", "2.2m") or plain numbers in
  * the design file's convention (SI, temperatures in °C); units are checked against the
- * field's dimension.
+ * field's dimension in the design schema.
  *
  * Spacing: linear x_i = a + (b − a)·i/(n − 1); logarithmic x_i = a·(b/a)^(i/(n − 1)),
  * i = 0 … n − 1, with x_0 = a and x_(n−1) = b exactly.
  */
 import { InputError } from '../design/errors.js';
 import type { Dimension } from '../units/quantity.js';
-import { readDesignPath, type DesignPath, type OptionSource } from './designPath.js';
+import type { DesignPath, OptionSource } from './designPath.js';
+import type { DesignFieldInfo } from './designField.js';
 import { parseAxisValue } from './parseAxisValue.js';
-import { inferDimension } from './inferDimension.js';
+import { resolveField } from './resolveField.js';
 
 export type Spacing = 'linear' | 'log' | 'list';
 
@@ -38,7 +39,7 @@ export interface SweepAxis {
   path: DesignPath;
   spacing: Spacing;
   values: number[];
-  dimension?: Dimension;
+  dimension: Dimension;
   /** The option value as the user wrote it. */
   spec: string;
 }
@@ -106,20 +107,13 @@ function clean(x: number): number {
 }
 
 /**
- * Resolve a --vary spec against a design: the path must exist and hold a number or a quantity;
- * values are parsed with the field's dimension. Throws InputError naming `--vary` and the value.
- *
- * @param dimensionOf the field's dimension when the design schema knows it; by default it is
- *   read from the value already in the design file ("2200 uF" → capacitance).
+ * Resolve a --vary spec against a parsed design (design/parse.ts): the path must be a numeric
+ * field of the design schema; values are parsed with the field's dimension. Throws InputError
+ * naming `--vary` and the value.
  */
-export function resolveVaryAxis(
-  spec: VarySpec,
-  design: unknown,
-  dimensionOf: (path: DesignPath, current: number | string) => Dimension | undefined = (_p, current) => inferDimension(current),
-): SweepAxis {
+export function resolveVaryAxis(spec: VarySpec, design: unknown, fieldInfo?: (segments: readonly (string | number)[]) => DesignFieldInfo): SweepAxis {
   const source: OptionSource = { option: '--vary', value: spec.text, expected: VARY_EXPECTED };
-  const { path, value: current } = readDesignPath(design, spec.pathText, source);
-  const dimension = dimensionOf(path, current);
+  const { path, dimension } = resolveField(design, spec.pathText, source, fieldInfo);
   const parsed = spec.tokens.map((token) => {
     const r = parseAxisValue(token, dimension);
     if (!r.ok) {
@@ -145,5 +139,5 @@ export function resolveVaryAxis(
       values = logValues(a, b, count);
     } else values = linearValues(a, b, count);
   }
-  return { path, spacing: spec.spacing, values, ...(dimension !== undefined ? { dimension } : {}), spec: spec.text };
+  return { path, spacing: spec.spacing, values, dimension, spec: spec.text };
 }

@@ -1,0 +1,32 @@
+/**
+ * Resolve a field named on the command line (`--vary`, `--tolerance`) against a parsed design:
+ * the path must be a numeric field of the design schema (design/schema.ts); its dimension
+ * comes from the schema, its current value from the design (absent for an optional field not
+ * set in the file). Errors are InputErrors naming the option and its value.
+ */
+import { InputError } from '../design/errors.js';
+import type { Dimension } from '../units/quantity.js';
+import { readDesignPath, type DesignPath, type OptionSource } from './designPath.js';
+import { designFieldInfo, type DesignFieldInfo } from './designField.js';
+
+export interface ResolvedField {
+  path: DesignPath;
+  dimension: Dimension;
+  /** The design's value (SI, °C for temperatures); undefined when the optional field is not set. */
+  current: number | undefined;
+}
+
+export function resolveField(
+  design: unknown,
+  pathText: string,
+  source: OptionSource,
+  fieldInfo: (segments: readonly (string | number)[]) => DesignFieldInfo = designFieldInfo,
+): ResolvedField {
+  const { path, value } = readDesignPath(design, pathText, source, (p) => fieldInfo(p.segments).known);
+  const info = fieldInfo(path.segments);
+  const fail = (problem: string) => new InputError({ code: 'option.invalid', path: source.option, value: source.value, expected: source.expected, problem });
+  if (!info.known) throw fail(`${path.text} is in the design file but not a field of the design schema`);
+  if (!info.quantity) throw fail(`${path.text} is not a numeric field (it holds ${JSON.stringify(value)})`);
+  if (value !== undefined && typeof value !== 'number') throw fail(`${path.text} holds ${JSON.stringify(value)}, not a number`);
+  return { path, dimension: info.dimension, current: value };
+}

@@ -26,6 +26,8 @@ import { coilSection } from './sections/coil.js';
 import { coupledSection } from './sections/coupled.js';
 import { probesSection } from './sections/probes.js';
 import { solverSection } from './sections/solver.js';
+import { yokeSection } from './sections/yoke.js';
+import { steadySection } from './sections/steady.js';
 
 export const DESIGN_SECTIONS = {
   name: text('Name of the station or fixture, shown in reports; default: the file name').optional(),
@@ -38,6 +40,8 @@ export const DESIGN_SECTIONS = {
   coupled: coupledSection,
   probes: probesSection,
   solver: solverSection,
+  yoke: yokeSection.optional(),
+  steady: steadySection.optional(),
   // other sections: one line each (see above)
 };
 

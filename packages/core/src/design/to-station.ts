@@ -22,12 +22,13 @@ import { coupledLoopToStation } from './sections/coupled.js';
 import { freewheelToStation } from './sections/freewheel.js';
 import { solverToStation } from './sections/solver.js';
 import { switchToStation } from './sections/switch.js';
+import { yokeStationStep } from './sections/yoke.js';
 
 /** A conversion step contributed by a section: gets the design and the station so far, returns the new station. */
 export type StationStep = (design: Design, station: Station) => Station;
 
 /** Steps added by other sections, in order (one line each). */
-export const STATION_STEPS: StationStep[] = [];
+export const STATION_STEPS: StationStep[] = [yokeStationStep];
 
 /** Name given to probe 0. */
 export const PART_PROBE_NAME = 'part';
@@ -75,9 +76,15 @@ function baseStation(design: Design): { station: Station; issues: InputIssue[] }
     }
   });
 
+  // coil.inductance and coil.fieldPerAmpere may be left out only when a yoke section computes them.
+  if (!design.yoke) {
+    for (const k of ['inductance', 'fieldPerAmpere'] as const) {
+      if (design.coil[k] === undefined) issues.push(issue(`coil.${k}`, 'design.missing-field', undefined, 'missing', k === 'inductance' ? 'an inductance (H), e.g. 180 uH (or a yoke section)' : 'a field per ampere ((A/m)/A), e.g. 95 A/m/A (or a yoke section)'));
+    }
+  }
   const partProbe: FieldProbe = {
     name: PART_PROBE_NAME,
-    coil_ApmPerA: design.coil.fieldPerAmpere,
+    coil_ApmPerA: design.coil.fieldPerAmpere ?? NaN,
     loops_ApmPerA: loops.map((l) => l.fieldPerAmpere),
   };
   const probes: FieldProbe[] = [partProbe];

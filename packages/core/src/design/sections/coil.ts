@@ -12,9 +12,9 @@ import { qty, section } from '../quantity-schema.js';
 import { checkThermal, resolveThermal, thermalFields } from './thermal.js';
 
 export const coilSection = section('Fixture coil: electrical values, conductor, and its field at the part.', {
-  inductance: qty('inductance', { positive: true, description: 'Self inductance L of the coil (in its fixture)' }),
+  inductance: qty('inductance', { positive: true, description: 'Self inductance L of the coil (in its fixture); omit when a yoke section computes it' }).optional(),
   resistance: qty('resistance', { positive: true, description: 'Resistance at 20 °C' }),
-  fieldPerAmpere: qty('fieldPerCurrent', { positive: true, description: 'Field at the part per ampere of coil current' }),
+  fieldPerAmpere: qty('fieldPerCurrent', { positive: true, description: 'Field at the part per ampere of coil current; omit when a yoke section computes it' }).optional(),
   ...thermalFields('copper'),
   conductorArea: qty('area', { positive: true, description: 'Cross-section of the conductor of one turn (IEC 60949 check)' }).optional(),
   conductorLength: qty('length', { positive: true, description: 'Total conductor length' }).optional(),
@@ -25,7 +25,7 @@ export type CoilDesign = z.output<typeof coilSection>;
 export function coilToStation(c: CoilDesign): Coil {
   const th = resolveThermal(c);
   const coil: Coil = {
-    inductance_H: c.inductance,
+    inductance_H: c.inductance ?? NaN, // NaN only with a yoke section, whose StationStep fills it
     resistance20_Ohm: c.resistance,
     tempCoeff_perK: th.tempCoeff_perK,
     heatCapacity_JpK: th.heatCapacity_JpK,

@@ -78,6 +78,20 @@ export interface NgspiceRun {
   files: Record<string, string>;
   /** Wall-clock time of the ngspice process, s. */
   wall_s: number;
+  /** CPU time (user + system) of the ngspice process, s, when `measureCpu` was set (null otherwise). */
+  cpu_s: number | null;
+}
+
+const TIMES_MARK = '@@fluxkick-times@@';
+
+/** Children's user and system times from bash's `times` output (second line: "0m0.108s 0m0.047s"), s. */
+export function parseBashTimes(text: string): number | null {
+  const at = text.lastIndexOf(TIMES_MARK);
+  if (at < 0) return null;
+  const lines = text.slice(at + TIMES_MARK.length).trim().split('\n');
+  const m = /^(\d+)m([\d.]+)s\s+(\d+)m([\d.]+)s/.exec(lines[1]?.trim() ?? '');
+  if (!m) return null;
+  return Number(m[1]) * 60 + Number(m[2]) + Number(m[3]) * 60 + Number(m[4]);
 }
 
 /** Error raised when ngspice fails or reports an aborted analysis. */
@@ -94,14 +108,18 @@ const FAILURE_PATTERNS = [/simulation\(s\) aborted/i, /timestep too small/i, /^\
  * Run `ngspice -b deck.cir` in a fresh temporary directory. The deck should end its `.control` block with `quit`.
  * Every file the deck writes there is returned in `files`; the directory is removed afterwards.
  */
-export function runNgspice(deck: string, options: { timeout_ms?: number; executable?: string } = {}): NgspiceRun {
+export function runNgspice(deck: string, options: { timeout_ms?: number; executable?: string; measureCpu?: boolean } = {}): NgspiceRun {
   const exe = options.executable ?? findNgspice();
   if (!exe) throw new Error(ngspiceStatus().message);
   const dir = mkdtempSync(join(tmpdir(), 'fluxkick-ngspice-'));
   try {
     writeFileSync(join(dir, 'deck.cir'), deck);
     const t0 = performance.now();
-    const proc = spawnSync(exe, ['-b', 'deck.cir'], {
+    // With measureCpu, bash runs ngspice and then its `times` builtin reports the child's CPU time on stderr.
+    const [cmd, args] = options.measureCpu
+      ? ['bash', ['-c', `"$0" -b deck.cir; rc=$?; echo ${TIMES_MARK} >&2; times >&2; exit $rc`, exe]]
+      : [exe, ['-b', 'deck.cir']];
+    const proc = spawnSync(cmd, args as string[], {
       cwd: dir,
       encoding: 'utf8',
       timeout: options.timeout_ms ?? 120_000,
@@ -118,7 +136,8 @@ export function runNgspice(deck: string, options: { timeout_ms?: number; executa
     for (const p of FAILURE_PATTERNS) if (p.test(log)) throw new NgspiceError(`ngspice reported a failure (${p})`, log);
     const files: Record<string, string> = {};
     for (const name of readdirSync(dir)) if (name !== 'deck.cir') files[name] = readFileSync(join(dir, name), 'utf8');
-    return { stdout, stderr, files, wall_s };
+    const cpu_s = options.measureCpu ? parseBashTimes(stderr) : null;
+    return { stdout, stderr: options.measureCpu ? stderr.slice(0, Math.max(0, stderr.lastIndexOf(TIMES_MARK))) : stderr, files, wall_s, cpu_s };
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

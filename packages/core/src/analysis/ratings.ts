@@ -22,8 +22,9 @@
  * replaces all of this.
  */
 
-/** Half-sine bases of surge ratings. */
-export type SurgeBasis = '10ms' | '8.3ms';
+import type { SurgeBasis } from '../model/judge-inputs.js';
+
+export type { SurgeBasis };
 
 /** Base duration of a surge basis, s (half a period of 50 Hz or 60 Hz). */
 export function surgeBasisDuration_s(basis: SurgeBasis): number {

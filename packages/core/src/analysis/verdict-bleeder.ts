@@ -8,7 +8,7 @@
 import type { Station } from '../model/station.js';
 import type { VerdictItem } from '../model/verdict.js';
 import { bleederGuidance, bleederPower_W, bleederTime_s } from './bleeder.js';
-import { VERDICT_DEFAULTS, type BleederJudgeInput } from './verdict-inputs.js';
+import { VERDICT_DEFAULTS, type BleederJudgeInput } from '../model/judge-inputs.js';
 import { infoItem, judgedItem, marginAtMost } from './verdict-item.js';
 
 export function judgeBleeder(station: Station, b: BleederJudgeInput): VerdictItem[] {

@@ -14,7 +14,7 @@ import type { VerdictItem } from '../model/verdict.js';
 import { InputError } from '../design/errors.js';
 import { insulationClass, insulationClassLabel, insulationClassNames, type InsulationClass } from '../materials/insulation-classes.js';
 import { maxShotsPerMinute, steadyState, thermalTimeConstant, type ProductionHeatingInput } from './production-heating.js';
-import { VERDICT_DEFAULTS, type ProductionJudgeInput } from './verdict-inputs.js';
+import { VERDICT_DEFAULTS, type ProductionJudgeInput } from '../model/judge-inputs.js';
 import { infoItem, judgedItem, marginTemperature } from './verdict-item.js';
 
 export function resolveInsulationClass(key: number | string): InsulationClass {
@@ -117,7 +117,7 @@ export function judgeHeating(station: Station, result: ShotResult, p: Production
     items.push(
       infoItem(
         'production.max-rate',
-        'Highest rate within the class',
+        'Highest rate within the class (shots per minute)',
         maxRate,
         '1/min',
         `shots per minute keeping the steady peak at or below ${lim - margin_K} °C (class ${insulationClassLabel(cls)} minus ${margin_K} K), ${rNote}.`,

@@ -17,6 +17,11 @@ describe('verdict grading rules', () => {
     expect(statusFromMargin(0.19, 0.2)).toBe('warn');
     expect(statusFromMargin(0.2, 0.2)).toBe('pass');
     expect(statusFromMargin(Number.NaN, 0)).toBe('warn');
+    expect(statusFromMargin(-Infinity, 0)).toBe('fail');
+    expect(statusFromMargin(Infinity, 0.2)).toBe('pass');
+    // exactly at the margin despite rounding: 1 − 1600/2000 = 0.19999999999999996
+    expect(statusFromMargin(1 - 1600 / 2000, 0.2)).toBe('pass');
+    expect(statusFromMargin(1 - 2000 / 2000, 0)).toBe('pass');
   });
 
   it('marginAtMost, marginAtLeast and marginTemperature follow their definitions', () => {

@@ -11,11 +11,17 @@
  */
 import type { Verdict, VerdictItem, VerdictStatus } from '../model/verdict.js';
 
-/** Status from a computed margin and the required one: fail < 0 ≤ warn < required ≤ pass. */
+/**
+ * Rounding allowance when comparing margins: a value exactly at a user's margin (1600 V on a
+ * 2000 V rating with 20 % wanted gives 0.19999999999999996) counts as meeting it.
+ */
+export const MARGIN_TOLERANCE = 1e-12;
+
+/** Status from a computed margin and the required one: fail < 0 ≤ warn < required ≤ pass (to MARGIN_TOLERANCE). */
 export function statusFromMargin(margin: number, requiredMargin: number): VerdictStatus {
-  if (!Number.isFinite(margin)) return 'warn';
-  if (margin < 0) return 'fail';
-  if (margin < requiredMargin) return 'warn';
+  if (Number.isNaN(margin)) return 'warn';
+  if (margin < -MARGIN_TOLERANCE) return 'fail';
+  if (margin < requiredMargin - MARGIN_TOLERANCE) return 'warn';
   return 'pass';
 }
 

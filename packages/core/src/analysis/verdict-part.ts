@@ -15,7 +15,7 @@ import type { VerdictItem } from '../model/verdict.js';
 import { InputError } from '../design/errors.js';
 import { MAGNET_GRADE_IDS, applyMagnetOverrides, magnetGrade, type MagnetGrade } from '../materials/magnet-grades.js';
 import { SWITCHING_SPREAD, saturationFraction, saturationModelNote } from './saturation.js';
-import { VERDICT_DEFAULTS, type PartJudgeInput } from './verdict-inputs.js';
+import { VERDICT_DEFAULTS, type PartJudgeInput } from '../model/judge-inputs.js';
 import { infoItem, judgedItem, marginAtLeast, marginTemperature } from './verdict-item.js';
 
 /** The library grade with the overrides applied; an unknown id is an InputError at `part.grade`. */

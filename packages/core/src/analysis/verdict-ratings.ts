@@ -14,7 +14,7 @@ import type { Station } from '../model/station.js';
 import type { ShotResult } from '../model/result.js';
 import type { VerdictItem } from '../model/verdict.js';
 import { allowedSurgeCurrent_A, equivalentHalfSineDuration_s, ratedI2t_A2s, surgeBasisDuration_s } from './ratings.js';
-import { VERDICT_DEFAULTS, type DeviceRatingInput, type RatingsJudgeInput } from './verdict-inputs.js';
+import { VERDICT_DEFAULTS, type DeviceRatingInput, type RatingsJudgeInput } from '../model/judge-inputs.js';
 import { judgedItem, marginAtMost } from './verdict-item.js';
 
 function atMost(id: string, item: string, value: number, limit: number, unit: string, note: string, required: number): VerdictItem {

@@ -14,7 +14,7 @@ import type { VerdictItem } from '../model/verdict.js';
 import { MU0_HpM } from '../magnetics/constants.js';
 import { conductorProofStress } from '../materials/conductor-strength.js';
 import { HOOP_STRESS_MODEL_NOTE, magneticPressure_Pa, windingHoopStress_Pa } from './forces.js';
-import { VERDICT_DEFAULTS, type WindingMechanicsInput } from './verdict-inputs.js';
+import { VERDICT_DEFAULTS, type WindingMechanicsInput } from '../model/judge-inputs.js';
 import { infoItem, judgedItem, marginAtMost } from './verdict-item.js';
 
 /** Largest peak field that bears on the winding, A/m, and where it came from. */

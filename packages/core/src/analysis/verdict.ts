@@ -14,7 +14,7 @@
 import type { Station } from '../model/station.js';
 import type { ShotResult } from '../model/result.js';
 import type { Verdict, VerdictItem } from '../model/verdict.js';
-import type { JudgeInputs } from './verdict-inputs.js';
+import type { JudgeInputs } from '../model/judge-inputs.js';
 import { overallStatus } from './verdict-item.js';
 import { judgePart } from './verdict-part.js';
 import { judgeHeating } from './verdict-heating.js';

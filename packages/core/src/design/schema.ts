@@ -28,6 +28,10 @@ import { probesSection } from './sections/probes.js';
 import { solverSection } from './sections/solver.js';
 import { yokeSection } from './sections/yoke.js';
 import { steadySection } from './sections/steady.js';
+import { partSection } from './sections/part.js';
+import { ratingsSection } from './sections/ratings.js';
+import { productionSection } from './sections/production.js';
+import { bleederSection } from './sections/bleeder.js';
 
 export const DESIGN_SECTIONS = {
   name: text('Name of the station or fixture, shown in reports; default: the file name').optional(),
@@ -42,6 +46,10 @@ export const DESIGN_SECTIONS = {
   solver: solverSection,
   yoke: yokeSection.optional(),
   steady: steadySection.optional(),
+  part: partSection.optional(),
+  ratings: ratingsSection.optional(),
+  production: productionSection.optional(),
+  bleeder: bleederSection.optional(),
   // other sections: one line each (see above)
 };
 

@@ -1,15 +1,22 @@
 /**
  * What the verdict needs beyond the Station and the ShotResult: the part's grade and the
  * required field, device and capacitor ratings, the production rate and cooling, the bleeder,
- * the winding's mechanics. Plain SI values; the design file's sections (design/sections/part,
- * ratings, production, bleeder) produce them through `judgeInputsFromDesign`.
+ * the winding's mechanics. Plain SI values. The contract between the design file's check
+ * sections (design/sections/part, ratings, production, bleeder) and the verdict
+ * (analysis/verdict.ts `judgeShot`); `judgeInputsFromDesign` (analysis/verdict-design.ts)
+ * converts one to the other.
  *
  * Every default is defined once, in VERDICT_DEFAULTS; the design schema reuses them.
  * A group left out is not judged.
  */
 import type { MagnetOverrides } from '../materials/magnet-grades.js';
 import type { ConductorTemper } from '../materials/conductor-strength.js';
-import type { SurgeBasis } from './ratings.js';
+
+/** Half-sine bases of surge ratings: 10 ms (50 Hz) or 8.3 ms (60 Hz). */
+export type SurgeBasis = '10ms' | '8.3ms';
+
+/** The surge bases, for schemas. */
+export const SURGE_BASES = ['10ms', '8.3ms'] as const satisfies readonly SurgeBasis[];
 
 /** Defaults of the judge inputs (our own choices, documented as "user setting" in each note). */
 export const VERDICT_DEFAULTS = {

@@ -103,11 +103,16 @@ async function main(argv: string[]): Promise<number> {
     const t0 = performance.now();
     console.error(`running ${file} ...`);
     let mod: Record<string, unknown>;
+    // A self-reporting bench file may read process.argv itself: give it its own name only, not our filters.
+    const savedArgv = process.argv;
+    process.argv = [savedArgv[0], join(benchDir, file)];
     try {
       mod = (await import(pathToFileURL(join(benchDir, file)).href)) as Record<string, unknown>;
     } catch (e) {
       outcomes.push({ file, suite: file, rows: [], error: (e as Error).stack ?? String(e), seconds: (performance.now() - t0) / 1000 });
       continue;
+    } finally {
+      process.argv = savedArgv;
     }
     const suites = suitesOf(mod, file);
     if (suites.length === 0) {

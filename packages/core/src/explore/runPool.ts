@@ -29,8 +29,8 @@ export interface RunPoolOptions<R> {
   inThread?: (task: unknown) => R | Promise<R>;
   /** Stop starting new tasks when aborted. */
   signal?: AbortSignal;
-  /** Called after each task with (completed, total). */
-  onProgress?: (completed: number, total: number) => void;
+  /** Called after each task with (completed tasks, total tasks, index of the task just finished). */
+  onProgress?: (completed: number, total: number, index: number) => void;
 }
 
 export type TaskOutcome<R> = { ok: true; value: R } | { ok: false; error: string };
@@ -63,7 +63,7 @@ export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions
   const record = (i: number, outcome: TaskOutcome<R>) => {
     outcomes[i] = outcome;
     completed += 1;
-    options.onProgress?.(completed, total);
+    options.onProgress?.(completed, total, i);
   };
 
   if (threads === 0) {

@@ -34,6 +34,28 @@ function sameFile(a: string, b: string): boolean {
   }
 }
 
+/** The cause of a failed write in a few words, without the temporary file's name. */
+function plainReason(err: unknown, folder: string): string {
+  const code = (err as { code?: string } | null)?.code;
+  switch (code) {
+    case 'ENOENT':
+      return `the folder ${folder} does not exist`;
+    case 'ENOTDIR':
+      return `part of the path is not a folder`;
+    case 'EACCES':
+    case 'EPERM':
+      return 'permission denied';
+    case 'EISDIR':
+      return 'it is a folder';
+    case 'EROFS':
+      return 'read-only file system';
+    case 'ENOSPC':
+      return 'no space left on the device';
+    default:
+      return err instanceof Error ? err.message : String(err);
+  }
+}
+
 /** Write `content` to `path` atomically; throws InputError when the path is an input or cannot be written. */
 export function writeOutputFile(path: string, content: string | Uint8Array, options: WriteOutputOptions = {}): void {
   const field = options.field ?? 'output';
@@ -73,7 +95,7 @@ export function writeOutputFile(path: string, content: string | Uint8Array, opti
     } catch {
       /* never created, or already renamed */
     }
-    const reason = err instanceof Error ? err.message : String(err);
+    const reason = plainReason(err, dirname(target));
     throw new InputError({
       code: 'output.unwritable',
       path: field,

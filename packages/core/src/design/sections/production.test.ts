@@ -26,14 +26,16 @@ describe('design section production', () => {
     const j = productionToJudge(d.production!);
     expect(j.surfaceArea_m2).toBeCloseTo(0.05, 12);
     expect(j.convection_WpM2K).toBeCloseTo(12, 12);
-    expect(j.insulationClass).toBe(180);
+    expect(j.insulationClass).toBe('180');
     expect(j.ambient_C).toBeCloseTo(35, 12);
   });
 
-  it('an unknown insulation class is an InputError with the IEC 60085 list', () => {
+  it('an unknown insulation class is an InputError with the IEC 60085 list; letters are case-insensitive', () => {
     const e = fail('production: { insulationClass: 150 }\n');
     expect(e.issues[0]).toMatchObject({ code: 'design.not-one-of', path: 'production.insulationClass' });
     expect(e.issues[0]!.expected).toMatch(/155/);
+    expect(fail('production: { insulationClass: G }\n').issues[0]).toMatchObject({ code: 'design.not-one-of', path: 'production.insulationClass' });
+    expect(productionToJudge(parse('production: { insulationClass: h }\n').production!).insulationClass).toBe('H');
   });
 
   it('a rate without any cooling, or half of the h·A estimate, is an InputError naming the missing field', () => {

@@ -14,13 +14,19 @@
 import { z } from 'zod';
 import type { ProductionJudgeInput } from '../../model/judge-inputs.js';
 import { VERDICT_DEFAULTS } from '../../model/judge-inputs.js';
-import { insulationClass, insulationClassNames } from '../../materials/insulation-classes.js';
+import { INSULATION_CLASSES, insulationClassNames } from '../../materials/insulation-classes.js';
 import { num, qty, section, type IssueFacts } from '../quantity-schema.js';
-import { nearest } from '../issues.js';
 
+const CLASS_NAMES = insulationClassNames() as [string, ...string[]];
+
+/** The class as a number (155) or a letter ("F"); numbers are read as their text. */
 const classField = z
-  .union([z.number(), z.string()])
-  .meta({ description: `IEC 60085 thermal class of the winding insulation: ${insulationClassNames().join(', ')}` });
+  .preprocess((v) => (typeof v === 'number' ? String(v) : typeof v === 'string' ? v.trim().toUpperCase() : v), z.enum(CLASS_NAMES))
+  .meta({
+    type: ['string', 'number'],
+    enum: [...INSULATION_CLASSES.map((c) => c.temperature_C), ...CLASS_NAMES],
+    description: `IEC 60085 thermal class of the winding insulation: ${CLASS_NAMES.join(', ')}`,
+  } as Record<string, unknown>);
 
 export const productionSection = section('Production rate, cooling between shots and the insulation class of the winding. Used by the verdict only.', {
   shotsPerMinute: num({ positive: true, description: 'Shots per minute (a plain number); leave out to check one shot only' }).optional(),
@@ -34,13 +40,6 @@ export const productionSection = section('Production rate, cooling between shots
 }).superRefine((p, ctx) => {
   const add = (path: string, facts: IssueFacts) =>
     ctx.addIssue({ code: 'custom', path: [path], message: `${facts.problem}; expected ${facts.expected}`, params: { fluxkick: facts } });
-  if (p.insulationClass !== undefined && !insulationClass(p.insulationClass)) {
-    const names = insulationClassNames();
-    const facts: IssueFacts = { code: 'design.not-one-of', problem: `${JSON.stringify(p.insulationClass)} is not an IEC 60085 class`, expected: `one of: ${names.join(', ')}` };
-    const near = typeof p.insulationClass === 'string' ? nearest(p.insulationClass, names) : undefined;
-    if (near !== undefined) facts.suggestion = near;
-    add('insulationClass', facts);
-  }
   if (p.shotsPerMinute !== undefined && p.thermalTimeConstant === undefined && (p.surfaceArea === undefined) !== (p.convection === undefined)) {
     add(p.surfaceArea === undefined ? 'surfaceArea' : 'convection', {
       code: 'design.missing-field',

@@ -36,8 +36,8 @@ export { yokeNetwork, yokeOperatingPoint, yokeInductanceLimits, yokeCurrentForPa
 export type { YokeSpec, YokeOperatingPoint } from './magnetics/yoke.js';
 export { buildYokeCoil, yokeCurrentBound } from './magnetics/yoke-coil.js';
 export type { YokeCoil, YokeCoilOptions } from './magnetics/yoke-coil.js';
-export { steadyCurrent, currentForField } from './analysis/steady-current.js';
-export type { DcSupply, SteadyCoil, CoilCooling, SteadyFieldLaw, SteadyCurrentResult, SteadyPoint } from './analysis/steady-current.js';
+export { steadyCurrent, currentForField, holdDesign } from './analysis/steady-current.js';
+export type { DcSupply, SteadyCoil, CoilCooling, SteadyFieldLaw, SteadyCurrentResult, SteadyPoint, HoldOverrides, HoldReport, HoldYokeState } from './analysis/steady-current.js';
 export { simulateShot } from './solve/shot.js';
 export type { SimulateOptions } from './solve/shot.js';
 export { seriesRlcClosedForm, rlDecayWithDrop } from './analysis/closed-form.js';

@@ -9,6 +9,7 @@ import { registerDemo } from './demo.js';
 import { registerShot } from './shot.js';
 import { registerCheck } from './check.js';
 import { registerSchema } from './schema.js';
+import { registerHold } from './hold.js';
 
 export type RegisterCommand = (program: Command, ctx: CliContext) => Command;
 
@@ -17,4 +18,5 @@ export const COMMANDS: RegisterCommand[] = [
   registerShot,
   registerCheck,
   registerSchema,
+  registerHold,
 ];

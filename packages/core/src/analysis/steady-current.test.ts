@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { currentForField, steadyCurrent, type CoilCooling, type DcSupply, type SteadyCoil } from './steady-current.js';
+import { currentForField, holdDesign, steadyCurrent, type CoilCooling, type DcSupply, type SteadyCoil } from './steady-current.js';
 import { yokeCurrentForPartField, yokeOperatingPoint, type YokeSpec } from '../magnetics/yoke.js';
 import { steelCurve } from '../materials/steels.js';
 
@@ -105,5 +105,45 @@ describe('steadyCurrent', () => {
 
   it('currentForField returns NaN for a non-positive target', () => {
     expect(Number.isNaN(currentForField(linear(3), 0))).toBe(true);
+  });
+});
+
+describe('holdDesign', () => {
+  const BASE = `
+bank: { capacitance: 1 mF, voltage: 400 V }
+switch: { kind: thyristor }
+cable: { resistance: 1 mohm, inductance: 1 uH }
+coil: { inductance: 2 mH, resistance: 1.5 ohm, fieldPerAmpere: 900 A/m/A, conductor: copper, mass: 0.8 kg }
+`;
+
+  it('air-core coil: field = fieldPerAmpere·I and the copper R(T) from the coil section (IEC 60028 α20 = 0.00393 /K)', async () => {
+    const { parseDesign } = await import('../design/parse.js');
+    const d = parseDesign(BASE + 'steady:\n  supply: { currentLimit: 4 A }\n  cooling: { thermalResistance: 2 K/W, ambient: 30 degC }\n  targetField: 2700 A/m\n', 'c.yaml');
+    const r = holdDesign(d);
+    expect(r.fixture).toBe('coil');
+    expect(r.yoke).toBeUndefined();
+    const k = 2 * 16 * 1.5;
+    const T = (30 + k * (1 - 20 * 0.00393)) / (1 - k * 0.00393); // closed form (current-limited)
+    expect(Math.abs(r.result.point!.coilTemperature_C - T)).toBeLessThan(1e-8);
+    expect(r.result.point!.partField_Apm).toBeCloseTo(3600, 9);
+    expect(r.result.target!.current_A).toBeCloseTo(3, 12);
+    // heat capacity from mass × copper specific heat (385 J/(kg·K), CRC Handbook): τ = C·R_th/(1 − R_th·I²·R20·α)
+    expect(r.result.point!.thermalTimeConstant_s!).toBeCloseTo((0.8 * 385 * 2) / (1 - k * 0.00393), 3);
+  });
+
+  it('overrides win over the steady section, and a missing supply or cooling is an InputError naming steady.supply / steady.cooling', async () => {
+    const { parseDesign } = await import('../design/parse.js');
+    const { InputError } = await import('../design/errors.js');
+    const d = parseDesign(BASE + 'steady:\n  supply: { currentLimit: 4 A }\n  cooling: { thermalResistance: 2 K/W }\n', 'c.yaml');
+    expect(holdDesign(d, { currentLimit_A: 2 }).result.point!.current_A).toBe(2);
+    const bare = parseDesign(BASE, 'c.yaml');
+    try {
+      holdDesign(bare);
+      throw new Error('expected InputError');
+    } catch (e) {
+      expect(e).toBeInstanceOf(InputError);
+      expect((e as InstanceType<typeof InputError>).issues.map((i) => i.path)).toEqual(['steady.supply', 'steady.cooling']);
+    }
+    expect(holdDesign(bare, { voltage_V: 6, thermalResistance_KpW: 3 }).result.mode).toBe('voltage-limited');
   });
 });

@@ -26,6 +26,12 @@
 
 import type { Warning } from '../model/result.js';
 import { brentZero } from '../solve/brent.js';
+import type { Design } from '../design/schema.js';
+import { InputError, type InputIssue } from '../design/errors.js';
+import { resolveThermal } from '../design/sections/thermal.js';
+import { DEFAULT_AMBIENT_C, steadyFromDesign } from '../design/sections/steady.js';
+import { yokeToSpec } from '../design/sections/yoke.js';
+import { yokeCurrentForPartField, yokeOperatingPoint, type YokeOperatingPoint, type YokeSpec, type YokeSteelState } from '../magnetics/yoke.js';
 
 /** A DC supply. */
 export interface DcSupply {
@@ -251,4 +257,107 @@ export function steadyCurrent(coil: SteadyCoil, supply: DcSupply, cooling: CoilC
     result.target = { field_Apm: target, current_A: iReq, point: tp, reachable: Number.isFinite(iReq) && limits.length === 0, limits };
   }
   return result;
+}
+
+/** Command-line or API overrides of the design's `steady` section (SI; °C for temperatures). */
+export interface HoldOverrides {
+  voltage_V?: number;
+  currentLimit_A?: number;
+  seriesResistance_Ohm?: number;
+  ambient_C?: number;
+  thermalResistance_KpW?: number;
+  targetField_Apm?: number;
+  maxTemperature_C?: number;
+}
+
+/** Magnetic state of a yoke at a held current (for reports). */
+export interface HoldYokeState {
+  current_A: number;
+  partFluxDensity_T: number;
+  leakageFraction: number;
+  /** Incremental inductance there, H (what the supply's current regulator sees). */
+  incrementalInductance_H: number;
+  /** Magnetic energy stored at that current, J (released into the circuit when it is switched off). */
+  magneticEnergy_J: number;
+  steel: YokeSteelState[];
+}
+
+/** Steady current of a design's fixture: inputs as understood, result, and (for a yoke) its magnetic state. */
+export interface HoldReport {
+  name: string;
+  fixture: 'yoke' | 'coil';
+  supply: DcSupply;
+  cooling: CoilCooling;
+  options: SteadyOptions;
+  result: SteadyCurrentResult;
+  /** Yoke state at the settled current (undefined for a coil without yoke or when the coil runs away). */
+  yoke?: HoldYokeState;
+  /** Yoke state at the current needed for the target field. */
+  yokeAtTarget?: HoldYokeState;
+}
+
+function yokeState(op: YokeOperatingPoint): HoldYokeState {
+  return {
+    current_A: op.current_A,
+    partFluxDensity_T: op.partFluxDensity_T,
+    leakageFraction: op.leakageFraction,
+    incrementalInductance_H: op.incrementalInductance_H,
+    magneticEnergy_J: op.magneticEnergy_J,
+    steel: op.steel,
+  };
+}
+
+/**
+ * The steady-current analysis of a parsed design: coil resistance and heat capacity from the
+ * `coil` section, the field law from the `yoke` section (direct magnetic-circuit solves) or from
+ * `coil.fieldPerAmpere`, supply and cooling from the `steady` section with `overrides` on top.
+ * Throws InputError when the supply or the cooling is not given anywhere.
+ */
+export function holdDesign(design: Design, overrides: HoldOverrides = {}, file?: string): HoldReport {
+  const base = design.steady ? steadyFromDesign(design.steady) : undefined;
+  const supply: DcSupply = {
+    voltage_V: overrides.voltage_V ?? base?.supply.voltage_V ?? Infinity,
+    currentLimit_A: overrides.currentLimit_A ?? base?.supply.currentLimit_A ?? Infinity,
+    seriesResistance_Ohm: overrides.seriesResistance_Ohm ?? base?.supply.seriesResistance_Ohm ?? 0,
+  };
+  const thermalResistance_KpW = overrides.thermalResistance_KpW ?? base?.cooling.thermalResistance_KpW;
+  const issues: InputIssue[] = [];
+  if (!Number.isFinite(supply.voltage_V) && !Number.isFinite(supply.currentLimit_A)) {
+    issues.push({ code: 'design.missing-field', path: 'steady.supply', value: undefined, problem: 'missing: no supply voltage or current limit', expected: 'a steady section with supply: { voltage, currentLimit }, or --voltage and/or --current-limit' });
+  }
+  if (thermalResistance_KpW === undefined) {
+    issues.push({ code: 'design.missing-field', path: 'steady.cooling', value: undefined, problem: 'missing: the cooling of the coil', expected: 'a steady section with cooling: { thermalResistance } (or heatTransferCoefficient and area), or --thermal-resistance' });
+  }
+  if (issues.length) throw new InputError(issues, file);
+  const cooling: CoilCooling = { ambient_C: overrides.ambient_C ?? base?.cooling.ambient_C ?? DEFAULT_AMBIENT_C, thermalResistance_KpW: thermalResistance_KpW! };
+  const options: SteadyOptions = { ...base?.options };
+  if (overrides.targetField_Apm !== undefined) options.targetField_Apm = overrides.targetField_Apm;
+  if (overrides.maxTemperature_C !== undefined) options.maxTemperature_C = overrides.maxTemperature_C;
+
+  const th = resolveThermal(design.coil);
+  const coil: SteadyCoil = { resistance20_Ohm: design.coil.resistance, tempCoeff_perK: th.tempCoeff_perK, heatCapacity_JpK: th.heatCapacity_JpK };
+  let field: SteadyFieldLaw;
+  let spec: YokeSpec | undefined;
+  if (design.yoke) {
+    const s = yokeToSpec(design.yoke);
+    spec = s;
+    let warm: YokeOperatingPoint | undefined;
+    field = {
+      fieldAtPart_Apm: (i) => {
+        warm = yokeOperatingPoint(s, i, warm);
+        return warm.partField_Apm;
+      },
+      currentForField_A: (h) => yokeCurrentForPartField(s, h).current_A,
+    };
+  } else {
+    const k = design.coil.fieldPerAmpere ?? NaN;
+    field = { fieldAtPart_Apm: (i) => k * i, currentForField_A: (h) => (h > 0 ? h / k : NaN) };
+  }
+  const result = steadyCurrent(coil, supply, cooling, field, options);
+  const report: HoldReport = { name: design.name ?? 'unnamed design', fixture: spec ? 'yoke' : 'coil', supply, cooling, options, result };
+  if (spec) {
+    if (result.point) report.yoke = yokeState(yokeOperatingPoint(spec, result.point.current_A));
+    if (result.target && Number.isFinite(result.target.current_A)) report.yokeAtTarget = yokeState(yokeOperatingPoint(spec, result.target.current_A));
+  }
+  return report;
 }

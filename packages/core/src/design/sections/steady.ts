@@ -14,7 +14,6 @@
  * (typical, from memory); measure R_th on the real coil when it matters.
  */
 import type { z } from 'zod';
-import type { CoilCooling, DcSupply, SteadyOptions } from '../../analysis/steady-current.js';
 import { qty, section, type IssueFacts } from '../quantity-schema.js';
 
 /** Ambient temperature when none is given, °C (a room; common practice for bench ratings). */
@@ -56,10 +55,17 @@ export const steadySection = section('Steady current (`fluxkick hold`): a DC sup
 
 export type SteadyDesign = z.output<typeof steadySection>;
 
+/** The steady-current inputs of a checked `steady` section, SI (the shapes of analysis/steady-current.ts). */
+export interface SteadyInputs {
+  supply: { voltage_V: number; currentLimit_A: number; seriesResistance_Ohm: number };
+  cooling: { ambient_C: number; thermalResistance_KpW: number };
+  options: { targetField_Apm?: number; maxTemperature_C?: number };
+}
+
 /** The analysis inputs of a checked `steady` section. */
-export function steadyFromDesign(s: SteadyDesign): { supply: DcSupply; cooling: CoilCooling; options: SteadyOptions } {
+export function steadyFromDesign(s: SteadyDesign): SteadyInputs {
   const thermalResistance_KpW = s.cooling.thermalResistance ?? 1 / (s.cooling.heatTransferCoefficient! * s.cooling.area!);
-  const options: SteadyOptions = {};
+  const options: SteadyInputs['options'] = {};
   if (s.targetField !== undefined) options.targetField_Apm = s.targetField;
   if (s.maxTemperature !== undefined) options.maxTemperature_C = s.maxTemperature;
   return {

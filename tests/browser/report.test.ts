@@ -12,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { chromium } from 'playwright-core';
-import { loadStation, shotReportHtml, simulateShot, writeOutputFile } from '@fluxkick/core';
+import { designToStation, judgeInputsFromDesign, judgeShot, loadDesign, shotReportHtml, simulateShot, writeOutputFile } from '@fluxkick/core';
 
 const CHROMIUM = '/usr/bin/chromium';
 const missing = !existsSync(CHROMIUM);
@@ -31,10 +31,12 @@ describe('HTML report in a real browser', () => {
   it.skipIf(missing && !inCi)('renders a simulated shot with no console errors, no network and every plot visible', async () => {
     if (missing) throw new Error(`CI is set but ${CHROMIUM} is missing: the browser test cannot run`);
     // a station with a coupled sleeve and two probes, so the plot has several phases and field lines
-    const station = loadStation(join(ROOT, 'examples', 'sleeved-rotor.yaml'));
+    const design = loadDesign(join(ROOT, 'examples', 'sleeved-rotor.yaml'));
+    const station = designToStation(design, 'examples/sleeved-rotor.yaml');
     const result = simulateShot(station);
+    const verdict = judgeShot(station, judgeInputsFromDesign(design), result);
     const file = join(dir, 'report.html');
-    writeOutputFile(file, shotReportHtml({ station, result, subtitle: 'examples/sleeved-rotor.yaml' }));
+    writeOutputFile(file, shotReportHtml({ station, result, verdict, subtitle: 'examples/sleeved-rotor.yaml' }));
 
     const browser = await chromium.launch({
       executablePath: CHROMIUM,
@@ -81,6 +83,12 @@ describe('HTML report in a real browser', () => {
       expect(safety!.y).toBeLessThan(200);
       expect(safety!.y).toBeLessThan(plot!.y);
       expect(await page.locator('section.safety').innerText()).toContain('dielectric absorption');
+      // the verdict table has one row per item, each with its status written out
+      if (verdict.items.length > 0) {
+        const rows = page.locator('table.t-verdict tbody tr');
+        expect(await rows.count()).toBe(verdict.items.length);
+        expect(await rows.first().locator('td.status').innerText()).toMatch(/PASS|WARN|FAIL|info/);
+      }
 
       mkdirSync(ARTIFACTS, { recursive: true });
       await page.screenshot({ path: join(ARTIFACTS, 'report.png'), fullPage: true });

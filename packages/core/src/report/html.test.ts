@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { shotReportHtml } from './html.js';
+import { shotReportHtml, verdictCounts } from './html.js';
 import { rlcShot } from './__fixtures__/rlc.js';
 import { allElements, parseXml, textOf } from './__fixtures__/xml.js';
 import { formatQuantity } from './quantity.js';
@@ -60,5 +60,13 @@ describe('shotReportHtml({station, result, verdict})', () => {
     const h = shotReportHtml({ station, result });
     expect(h).toContain('No verdict was computed');
     expect(h).not.toContain('id="verdict"');
+  });
+});
+
+describe('verdictCounts', () => {
+  it('counts only the statuses present and says when no limit was checked', () => {
+    expect(verdictCounts(verdict)).toBe('1 failed, 1 passed');
+    const info = { ...verdict.items[0], status: 'info' as const };
+    expect(verdictCounts({ items: [info], overall: 'pass' })).toBe('no limit checked; 1 for information');
   });
 });

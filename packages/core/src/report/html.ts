@@ -86,6 +86,21 @@ export function htmlTable(t: Table, headingLevel = 2, title = t.title): string {
   return `${head}\n<table class="t-${esc(t.id)}">\n<thead><tr>${th}</tr></thead>\n<tbody>\n${rows.join('\n')}\n</tbody>\n</table>${notes ? '\n' + notes : ''}`;
 }
 
+/** "1 failed, 2 passed, 1 for information" (only the statuses present); "no limit checked" when none. */
+export function verdictCounts(verdict: Verdict): string {
+  const n = (st: string) => verdict.items.filter((i) => i.status === st).length;
+  const parts = [
+    [n('fail'), 'failed'],
+    [n('warn'), 'with a warning'],
+    [n('pass'), 'passed'],
+    [n('info'), 'for information'],
+  ]
+    .filter(([k]) => (k as number) > 0)
+    .map(([k, w]) => `${k} ${w}`);
+  const checked = n('fail') + n('warn') + n('pass');
+  return checked === 0 ? ['no limit checked', ...parts].join('; ') : parts.join(', ');
+}
+
 /** The whole report as one HTML document. */
 export function shotReportHtml(input: ShotReportInput): string {
   const { station, result, verdict } = input;
@@ -94,7 +109,7 @@ export function shotReportHtml(input: ShotReportInput): string {
   const byId = new Map(tables.map((t) => [t.id, t]));
   const section = (id: string) => (byId.has(id) ? htmlTable(byId.get(id)!) : '');
   const overall = verdict
-    ? `<p class="overall ${verdict.overall}">Overall verdict: <strong>${verdict.overall.toUpperCase()}</strong> (${verdict.items.filter((i) => i.status === 'fail').length} failed, ${verdict.items.filter((i) => i.status === 'warn').length} with a warning, ${verdict.items.filter((i) => i.status === 'pass').length} passed).</p>`
+    ? `<p class="overall ${verdict.overall}">Overall verdict: <strong>${verdict.overall.toUpperCase()}</strong> (${esc(verdictCounts(verdict))}).</p>`
     : '<p class="overall">No verdict was computed for this shot (no limits given).</p>';
   const plot = pulsePlotSvg(result, { title: `Pulse of "${name}"`, id: 'pulse' });
   const parts = [

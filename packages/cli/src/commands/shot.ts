@@ -8,6 +8,8 @@ import type { Command } from 'commander';
 import {
   designToStation,
   formatShotText,
+  judgeInputsFromDesign,
+  judgeShot,
   loadDesign,
   pulsePlotSvg,
   shotReportHtml,
@@ -34,15 +36,14 @@ export interface ShotOptions {
   color?: boolean;
 }
 
-/** Verdict on a shot; null until a verdict is available for this design. */
-export function shotVerdict(_design: Design, _station: Station, _result: ShotResult): Verdict | null {
-  return null;
+/** Verdict on a shot from the design's check sections (part, ratings, production, bleeder). */
+export function shotVerdict(design: Design, station: Station, result: ShotResult): Verdict | null {
+  return judgeShot(station, judgeInputsFromDesign(design), result);
 }
 
-/** True when the shot fails engineering checks (for --strict). */
+/** True when the shot fails engineering checks or the engine reports an error (for --strict). */
 export function isEngineeringFail(verdict: Verdict | null, result: ShotResult): boolean {
-  if (verdict) return verdict.overall === 'fail';
-  return result.warnings.some((w) => w.severity === 'error');
+  return verdict?.overall === 'fail' || result.warnings.some((w) => w.severity === 'error');
 }
 
 /** Simulate the design at `designPath` and print/write what the options ask for. Shared by `shot` and `demo`. */

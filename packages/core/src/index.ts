@@ -34,7 +34,7 @@ export { solveMagneticCircuit, checkMagneticNetwork } from './magnetics/magnetic
 export type { MagneticNetwork, MagneticBranch, MagneticElement, MagneticSolution } from './magnetics/magnetic-circuit.js';
 export { yokeNetwork, yokeOperatingPoint, yokeInductanceLimits, yokeCurrentForPartField } from './magnetics/yoke.js';
 export type { YokeSpec, YokeOperatingPoint } from './magnetics/yoke.js';
-export { buildYokeCoil, yokeCurrentBound } from './magnetics/yoke-coil.js';
+export { buildYokeCoil, yokeCurrentBound, yokeCoilWarnings } from './magnetics/yoke-coil.js';
 export type { YokeCoil, YokeCoilOptions } from './magnetics/yoke-coil.js';
 export { steadyCurrent, currentForField, holdDesign } from './analysis/steady-current.js';
 export type { DcSupply, SteadyCoil, CoilCooling, SteadyFieldLaw, SteadyCurrentResult, SteadyPoint, HoldOverrides, HoldReport, HoldYokeState } from './analysis/steady-current.js';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { buildYokeCoil, yokeCurrentBound } from './yoke-coil.js';
+import { buildYokeCoil, yokeCoilWarnings, yokeCurrentBound } from './yoke-coil.js';
 import { yokeInductanceLimits, yokeOperatingPoint, type YokeSpec } from './yoke.js';
 import { steelCurve } from '../materials/steels.js';
 
@@ -101,5 +101,14 @@ describe('buildYokeCoil', () => {
 
   it('rejects a non-positive table top', () => {
     expect(() => buildYokeCoil(spec, { maxCurrent_A: 0 })).toThrow(RangeError);
+  });
+
+  it('yokeCoilWarnings flags a shot beyond the table and stays silent inside it or for other coils', () => {
+    expect(yokeCoilWarnings(coil, 0.9 * iMax)).toEqual([]);
+    expect(yokeCoilWarnings(coil, -1.1 * iMax).map((w) => w.code)).toEqual(['yoke.table-range']);
+    expect(yokeCoilWarnings(undefined, 1e9)).toEqual([]);
+    const capped = buildYokeCoil(spec, { maxCurrent_A: iMax, maxKnots: 20 });
+    expect(capped.table.ok).toBe(false);
+    expect(yokeCoilWarnings(capped, 1).map((w) => w.code)).toEqual(['yoke.table-tolerance']);
   });
 });

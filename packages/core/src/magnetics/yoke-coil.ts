@@ -25,6 +25,7 @@
  */
 
 import type { NonlinearCoil } from '../model/station.js';
+import type { Warning } from '../model/result.js';
 import { cubicInverse, cubicIntegral, cubicSlope, cubicValue, monotoneCubic } from './magnetic-circuit-spline.js';
 import { yokeInductanceLimits, yokeOperatingPoint, type YokeOperatingPoint, type YokeSpec } from './yoke.js';
 
@@ -174,4 +175,31 @@ export function buildYokeCoil(spec: YokeSpec, options: YokeCoilOptions): YokeCoi
       buildTime_s: (performance.now() - t0) / 1000,
     },
   };
+}
+
+/**
+ * Warnings about a yoke coil's table for a finished shot (stable codes of our own):
+ * `yoke.table-tolerance` when the table missed its tolerance (a network solve did not converge,
+ * or the knot cap stopped refinement), `yoke.table-range` when the shot's peak current went
+ * beyond the table (λ(i) was extrapolated with the end slope there). Empty for other coils.
+ */
+export function yokeCoilWarnings(coil: NonlinearCoil | undefined, peakCurrent_A: number): Warning[] {
+  const table = (coil as Partial<YokeCoil> | undefined)?.table;
+  if (!table) return [];
+  const out: Warning[] = [];
+  if (!table.ok) {
+    out.push({
+      code: 'yoke.table-tolerance',
+      message: `The yoke's flux-linkage table reached a relative error of ${table.maxRelError.toExponential(1)} only (a magnetic-circuit solve did not converge or the knot limit was hit); results carry that error.`,
+      severity: 'warning',
+    });
+  }
+  if (Math.abs(peakCurrent_A) > table.maxCurrent_A) {
+    out.push({
+      code: 'yoke.table-range',
+      message: `The peak current ${Math.abs(peakCurrent_A).toPrecision(4)} A went beyond the yoke table (${table.maxCurrent_A.toPrecision(4)} A); above it λ(i) continues with its end slope.`,
+      severity: 'warning',
+    });
+  }
+  return out;
 }

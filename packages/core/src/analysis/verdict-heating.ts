@@ -47,7 +47,7 @@ export function judgeHeating(station: Station, result: ShotResult, p: Production
   const margin_K = p.margin_K ?? VERDICT_DEFAULTS.temperatureMargin_K;
   const ambient = p.ambient_C ?? VERDICT_DEFAULTS.ambient_C;
   const cls = p.insulationClass !== undefined ? resolveInsulationClass(p.insulationClass) : undefined;
-  const classNote = cls ? `limit: insulation class ${insulationClassLabel(cls)} (IEC 60085); ${margin_K} K headroom wanted (user setting)` : '';
+  const classNote = cls ? `limit: insulation class ${insulationClassLabel(cls)}, IEC 60085; ${margin_K} K headroom wanted` : '';
 
   if (cls) {
     const start = station.coil.initialTemperature_C;
@@ -88,7 +88,7 @@ export function judgeHeating(station: Station, result: ShotResult, p: Production
     const lim = cls.temperature_C;
     const base = {
       id: 'coil.temperature.production',
-      item: `Coil peak temperature at ${p.shotsPerMinute} shots/min`,
+      item: `Coil peak temperature at ${p.shotsPerMinute}/min`,
       limit: lim,
       unit: '°C',
     };
@@ -127,7 +127,7 @@ export function judgeHeating(station: Station, result: ShotResult, p: Production
     items.push(
       infoItem(
         'coil.temperature.production',
-        `Coil peak temperature at ${p.shotsPerMinute} shots/min`,
+        `Coil peak temperature at ${p.shotsPerMinute}/min`,
         ss?.runaway ? Infinity : peak,
         '°C',
         ss?.runaway

@@ -44,6 +44,7 @@ export function worstPartProbe(result: ShotResult): { name: string; peakField_Ap
 }
 
 const fmtMA = (h: number) => `${(h / 1e6).toPrecision(3)} MA/m`;
+const pct = (m: number) => `${Number((m * 100).toPrecision(3))} %`;
 
 export function judgePart(result: ShotResult, part: PartJudgeInput): VerdictItem[] {
   const grade = resolvePartGrade(part);
@@ -57,7 +58,7 @@ export function judgePart(result: ShotResult, part: PartJudgeInput): VerdictItem
   const requiredBasis =
     part.requiredField_Apm !== undefined
       ? 'required field: user setting'
-      : `required field: ${grade.name} saturation field ${fmtMA(required)} (${grade.saturationField_Apm.source})`;
+      : `required field: saturation field of ${grade.id}, ${grade.saturationField_Apm.source}`;
   items.push(
     judgedItem(
       {
@@ -67,7 +68,7 @@ export function judgePart(result: ShotResult, part: PartJudgeInput): VerdictItem
         limit: required,
         unit: 'A/m',
         margin: marginAtLeast(field, required),
-        note: `${where}; ${requiredBasis}; margin wanted ${(fieldMargin * 100).toFixed(0)} % (user setting). If short: raise the charge voltage or the field per ampere.`,
+        note: `${where}; ${requiredBasis}; ${pct(fieldMargin)} headroom wanted. If short: raise the charge voltage or the field per ampere.`,
       },
       fieldMargin,
     ),
@@ -84,7 +85,7 @@ export function judgePart(result: ShotResult, part: PartJudgeInput): VerdictItem
       'Peak field / H_cJ',
       field / hcj,
       '',
-      `H_cJ = ${fmtMA(hcj)} (${grade.intrinsicCoercivity_Apm.source}); common rule: at least 2 to 3 × H_cJ, more for rare-earth grades (DOMAIN.md, common practice).`,
+      `H_cJ = ${fmtMA(hcj)} (${grade.intrinsicCoercivity_Apm.source}); common practice asks 2 to 3 × H_cJ, more for rare-earth grades (DOMAIN.md).`,
     ),
   );
 
@@ -117,7 +118,7 @@ export function judgePart(result: ShotResult, part: PartJudgeInput): VerdictItem
           limit: tLimit,
           unit: '°C',
           margin: marginTemperature(hot.finalTemperature_C, tLimit, start),
-          note: `hottest part loop: ${hot.name}; limit: maximum working temperature (${grade.maxWorkingTemperature_C.source}); ${margin_K} K headroom wanted (user setting). If high: shorter pulse or a lower-loss part.`,
+          note: `hottest part loop: ${hot.name}; limit: maximum working temperature of ${grade.id}, ${grade.maxWorkingTemperature_C.source}; ${margin_K} K headroom wanted. If high: a shorter pulse or a lower-loss part.`,
         },
         requiredMargin,
       ),

@@ -21,7 +21,9 @@ function atMost(id: string, item: string, value: number, limit: number, unit: st
   return judgedItem({ id, item, value, limit, unit, margin: marginAtMost(value, limit), note }, required);
 }
 
-const ms = (t: number) => `${(t * 1e3).toPrecision(3)} ms`;
+const ms = (t: number) => `${Number((t * 1e3).toPrecision(3))} ms`;
+const kA = (i: number) => `${Number((i / 1e3).toPrecision(4))} kA`;
+const basisText = (b: string) => b.replace('ms', ' ms');
 
 function judgeDevice(
   key: 'switch' | 'diode',
@@ -37,7 +39,7 @@ function judgeDevice(
   const items: VerdictItem[] = [];
   const basis = d.surgeBasis ?? VERDICT_DEFAULTS.surgeBasis;
   const tBase = surgeBasisDuration_s(basis);
-  const mTxt = `${(required * 100).toFixed(0)} % headroom wanted (user setting)`;
+  const mTxt = `${Number((required * 100).toPrecision(3))} % headroom wanted`;
   if (d.surgeCurrent_A !== undefined) {
     const tEq = equivalentHalfSineDuration_s(peak_A, i2t_A2s);
     const allowed = allowedSurgeCurrent_A(d.surgeCurrent_A, tBase, tEq, floor_s);
@@ -48,14 +50,14 @@ function judgeDevice(
         Math.abs(peak_A),
         allowed,
         'A',
-        `surge rating ${d.surgeCurrent_A.toPrecision(4)} A on a ${basis} half-sine, scaled to the pulse's equivalent half-sine ${ms(tEq)} by I·√(t_base/t), t ≥ ${ms(floor_s)} (equal-I²t rule, approximation, common practice; the maker's surge curve wins); ${mTxt}.`,
+        `surge rating ${kA(d.surgeCurrent_A)} (${basisText(basis)} half-sine, user setting) scaled to the pulse's equivalent half-sine of ${ms(tEq)} by √(t_base/t), t ≥ ${ms(floor_s)}: equal-I²t rule, an approximation (common practice); the maker's surge curve wins; ${mTxt}.`,
         required,
       ),
     );
   }
   if (d.i2t_A2s !== undefined || d.surgeCurrent_A !== undefined) {
     const rated = ratedI2t_A2s(d.surgeCurrent_A ?? Number.NaN, tBase, d.i2t_A2s);
-    const src = d.i2t_A2s !== undefined ? 'rated I²t (user setting)' : `from the surge rating by I²t = I_TSM²·t/2 (${basis} half-sine)`;
+    const src = d.i2t_A2s !== undefined ? 'rated I²t (user setting)' : `rating from the surge rating by I²t = I_TSM²·t/2 (${basisText(basis)} half-sine)`;
     items.push(atMost(`${key}.i2t`, `${label} I²t`, i2t_A2s, rated, 'A²s', `${src}; ${mTxt}.`, required));
   }
   if (didt_Aps !== undefined && d.didt_Aps !== undefined) {
@@ -84,7 +86,7 @@ export function judgeRatings(station: Station, result: ShotResult, r: RatingsJud
   }
   const c = r.capacitor;
   if (c) {
-    const mTxt = `${(required * 100).toFixed(0)} % headroom wanted (user setting)`;
+    const mTxt = `${Number((required * 100).toPrecision(3))} % headroom wanted`;
     if (c.voltage_V !== undefined) {
       items.push(atMost('capacitor.voltage', 'Capacitor charge voltage', V0, c.voltage_V, 'V', `rated voltage (user setting); ${mTxt}.`, required));
     }

@@ -62,7 +62,7 @@ export function judgeWinding(station: Station, result: ShotResult, w: WindingMec
         limit: proof,
         unit: 'Pa',
         margin: marginAtMost(sigma, proof),
-        note: `${HOOP_STRESS_MODEL_NOTE} Limit: 0.2 % proof stress (${proofBasis}); safety factor ${sf} (user setting). If high: reinforce (banding, sleeve), harder conductor, lower field.`,
+        note: `${HOOP_STRESS_MODEL_NOTE} Limit: 0.2 % proof stress, ${proofBasis}; safety factor ${sf} wanted. If high: band or sleeve the winding, a harder conductor, a lower field.`,
       },
       sf > 1 ? 1 - 1 / sf : 0,
     ),

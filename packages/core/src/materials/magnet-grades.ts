@@ -71,8 +71,8 @@ export const MAGNET_PROPERTIES: readonly MagnetProperty[] = [
 /** Overrides from the design file (the datasheet), SI units. */
 export type MagnetOverrides = Partial<Record<MagnetProperty, number>>;
 
-const REF = 'REFERENCES.md (magnet materials, low confidence)';
-const DOM = 'DOMAIN.md (magnet materials table, typical, from memory)';
+const REF = 'REFERENCES.md (low confidence)';
+const DOM = 'DOMAIN.md table, typical, from memory';
 const MEM = 'typical, from memory';
 
 const v = (value: number, source: string): SourcedValue => ({ value, source });
@@ -95,10 +95,10 @@ function sinteredNdFeB(
     name: `Sintered NdFeB, ${cls} class`,
     mechanism: 'nucleation',
     saturationField_Apm: v(hsat_MApm * 1e6, hsatSource),
-    intrinsicCoercivity_Apm: v(hcj_kOe * (1e6 / (4 * Math.PI)), `${MEM} (class minimum, ${hcj_kOe} kOe)`),
+    intrinsicCoercivity_Apm: v(hcj_kOe * (1e6 / (4 * Math.PI)), `${MEM}, class minimum ${hcj_kOe} kOe`),
     remanence_T: v(br_T, MEM),
     resistivity_Ohm_m: v(1.4e-6, `${REF}: 1.2–1.6 µΩ·m`),
-    recoilPermeability: v(1.05, `${MEM} (DOMAIN.md: near 1.05 for rare-earth magnets)`),
+    recoilPermeability: v(1.05, `${MEM}; DOMAIN.md: near 1.05 for rare-earth magnets`),
     curieTemperature_C: v(310, `${REF}: 310–400 °C, lower end`),
     maxWorkingTemperature_C: v(tmax_C, MEM),
   };
@@ -107,12 +107,12 @@ function sinteredNdFeB(
 /** The grade library. Ids are stable. */
 export const MAGNET_GRADES: readonly MagnetGrade[] = [
   sinteredNdFeB('N', 12, 1.28, 2.4, `${REF}: 2.4–3.2 MA/m, lower end for the lowest-coercivity class`, 80),
-  sinteredNdFeB('M', 14, 1.28, 2.5, `${MEM} (within ${REF} 2.4–3.2 MA/m)`, 100),
-  sinteredNdFeB('H', 17, 1.25, 2.7, `${MEM} (within ${REF} 2.4–3.2 MA/m)`, 120),
-  sinteredNdFeB('SH', 20, 1.22, 2.9, `${MEM} (within ${REF} 2.4–3.2 MA/m)`, 150),
+  sinteredNdFeB('M', 14, 1.28, 2.5, `${MEM}; ${REF} gives 2.4–3.2 MA/m`, 100),
+  sinteredNdFeB('H', 17, 1.25, 2.7, `${MEM}; ${REF} gives 2.4–3.2 MA/m`, 120),
+  sinteredNdFeB('SH', 20, 1.22, 2.9, `${MEM}; ${REF} gives 2.4–3.2 MA/m`, 150),
   sinteredNdFeB('UH', 25, 1.18, 3.2, `${REF}: 2.4–3.2 MA/m, upper end`, 180),
-  sinteredNdFeB('EH', 30, 1.15, 3.5, `${MEM} (above ${REF} range: "higher for high-coercivity grades")`, 200),
-  sinteredNdFeB('AH', 35, 1.1, 3.8, `${MEM} (above ${REF} range: "higher for high-coercivity grades")`, 220),
+  sinteredNdFeB('EH', 30, 1.15, 3.5, `${MEM}; ${REF} gives 2.4–3.2 MA/m, "higher for high-coercivity grades"`, 200),
+  sinteredNdFeB('AH', 35, 1.1, 3.8, `${MEM}; ${REF} gives 2.4–3.2 MA/m, "higher for high-coercivity grades"`, 220),
   {
     id: 'ndfeb-bonded',
     family: 'ndfeb-bonded',
@@ -121,10 +121,10 @@ export const MAGNET_GRADES: readonly MagnetGrade[] = [
     saturationField_Apm: v(2.0e6, `${REF}: ≥ 2.0 MA/m`),
     intrinsicCoercivity_Apm: v(720e3, MEM),
     remanence_T: v(0.68, MEM),
-    resistivity_Ohm_m: v(1e-4, `${MEM} (near insulating, DOMAIN.md)`),
+    resistivity_Ohm_m: v(1e-4, `${MEM}; near insulating (DOMAIN.md)`),
     recoilPermeability: v(1.2, MEM),
     curieTemperature_C: v(310, `${REF}: NdFeB 310–400 °C, lower end`),
-    maxWorkingTemperature_C: v(120, `${MEM} (limited by the binder)`),
+    maxWorkingTemperature_C: v(120, `${MEM}; limited by the binder`),
   },
   {
     id: 'smco5',
@@ -132,7 +132,7 @@ export const MAGNET_GRADES: readonly MagnetGrade[] = [
     name: 'SmCo5 (sintered)',
     mechanism: 'nucleation',
     saturationField_Apm: v(3.2e6, `${REF}: SmCo about 3.2 MA/m`),
-    intrinsicCoercivity_Apm: v(1590e3, `${MEM} (about 20 kOe)`),
+    intrinsicCoercivity_Apm: v(1590e3, `${MEM}, about 20 kOe`),
     remanence_T: v(0.95, MEM),
     resistivity_Ohm_m: v(0.55e-6, `${REF}: 0.5–0.6 µΩ·m`),
     recoilPermeability: v(1.05, MEM),
@@ -145,12 +145,12 @@ export const MAGNET_GRADES: readonly MagnetGrade[] = [
     name: 'Sm2Co17 (sintered)',
     mechanism: 'pinning',
     saturationField_Apm: v(4.0e6, `${DOM}: 3.2–4.0 MA/m, upper end (pinning type)`),
-    intrinsicCoercivity_Apm: v(1990e3, `${MEM} (about 25 kOe)`),
+    intrinsicCoercivity_Apm: v(1990e3, `${MEM}, about 25 kOe`),
     remanence_T: v(1.08, MEM),
     resistivity_Ohm_m: v(0.85e-6, `${REF}: 0.8–0.9 µΩ·m`),
     recoilPermeability: v(1.05, MEM),
     curieTemperature_C: v(810, `${REF}: 800–825 °C`),
-    maxWorkingTemperature_C: v(300, `${MEM} (350 °C for high-temperature grades)`),
+    maxWorkingTemperature_C: v(300, `${MEM}; 350 °C for high-temperature grades`),
   },
   {
     id: 'ferrite',
@@ -170,11 +170,11 @@ export const MAGNET_GRADES: readonly MagnetGrade[] = [
     family: 'alnico',
     name: 'AlNiCo 5 (cast)',
     mechanism: 'shape',
-    saturationField_Apm: v(0.4e6, `${DOM}: 250–400 kA/m, upper end (${REF}: AlNiCo 0.24–0.64 MA/m)`),
-    intrinsicCoercivity_Apm: v(51e3, `${MEM} (about 640 Oe)`),
+    saturationField_Apm: v(0.4e6, `${DOM}: 250–400 kA/m, upper end; ${REF}: AlNiCo 0.24–0.64 MA/m`),
+    intrinsicCoercivity_Apm: v(51e3, `${MEM}, about 640 Oe`),
     remanence_T: v(1.25, MEM),
     resistivity_Ohm_m: v(0.47e-6, `${REF}: about 0.5 µΩ·m`),
-    recoilPermeability: v(3.0, `${MEM} (AlNiCo 5: about 3 to 4.5)`),
+    recoilPermeability: v(3.0, `${MEM}; AlNiCo 5: about 3 to 4.5`),
     curieTemperature_C: v(860, `${REF}: 700–860 °C, AlNiCo 5 at the upper end`),
     maxWorkingTemperature_C: v(525, MEM),
   },

@@ -73,6 +73,13 @@ describe('judgeHeating', () => {
     expect(Number.isFinite(noClass.value)).toBe(true);
   });
 
+  it('a runaway without an insulation class is reported as info with an infinite peak', () => {
+    const hot = fixtureResult({ figures: { coilTemperatureRise_K: 200, coilFinalTemperature_C: 225 } });
+    const it1 = byId(judgeHeating(station, hot, { thermalTimeConstant_s: 600, shotsPerMinute: 60 }), 'coil.temperature.production');
+    expect(it1).toMatchObject({ status: 'info', value: Infinity });
+    expect(it1.note).toMatch(/no steady state/);
+  });
+
   it('an unknown insulation class is an InputError at production.insulationClass', () => {
     try {
       judgeHeating(station, fixtureResult(), { insulationClass: 'Q' });

@@ -12,12 +12,8 @@
 import ellipk from '@stdlib/math-base-special-ellipk';
 import ellipe from '@stdlib/math-base-special-ellipe';
 
-/** K(m), complete elliptic integral of the first kind; m = k² (parameter, not modulus). */
-export function ellipticK(m: number): number {
-  return ellipk(m);
-}
+/** K(m), complete elliptic integral of the first kind; m = k² (parameter, not modulus). stdlib's function itself (no extra call). */
+export const ellipticK: (m: number) => number = ellipk;
 
-/** E(m), complete elliptic integral of the second kind; m = k² (parameter, not modulus). */
-export function ellipticE(m: number): number {
-  return ellipe(m);
-}
+/** E(m), complete elliptic integral of the second kind; m = k² (parameter, not modulus). stdlib's function itself (no extra call). */
+export const ellipticE: (m: number) => number = ellipe;

@@ -5,6 +5,7 @@
  * for the distributions).
  */
 import { InputError } from '../design/errors.js';
+import type { Dimension } from '../units/quantity.js';
 import type { DesignPath, OptionSource } from './designPath.js';
 import type { DesignFieldInfo } from './designField.js';
 import { resolveField } from './resolveField.js';
@@ -19,6 +20,7 @@ export interface ToleranceSpec {
 /** A tolerance resolved against a design: the field, its nominal value (design-file number: SI, °C for temperatures). */
 export interface ToleranceField {
   path: DesignPath;
+  dimension: Dimension;
   nominal: number;
   fraction: number;
   spec: string;
@@ -60,8 +62,8 @@ export function parseToleranceSpec(text: string): ToleranceSpec {
 /** Resolve a tolerance against a parsed design: the path must be a numeric field that is set. */
 export function resolveTolerance(spec: ToleranceSpec, design: unknown, fieldInfo?: (segments: readonly (string | number)[]) => DesignFieldInfo): ToleranceField {
   const source: OptionSource = { option: '--tolerance', value: spec.text, expected: TOLERANCE_EXPECTED };
-  const { path, current } = resolveField(design, spec.pathText, source, fieldInfo);
+  const { path, current, dimension } = resolveField(design, spec.pathText, source, fieldInfo);
   if (current === undefined) throw tolError(spec.text, `${path.text} is not set in the design, so it has no nominal value`);
   if (current === 0) throw tolError(spec.text, `${path.text} is 0 in the design, so a relative tolerance has no effect`);
-  return { path, nominal: current, fraction: spec.fraction, spec: spec.text };
+  return { path, dimension, nominal: current, fraction: spec.fraction, spec: spec.text };
 }

@@ -1,0 +1,20 @@
+/** The public API of explore/ (sweeps, sizing, tolerance runs), re-exported by src/index.ts. */
+export { runSweep, MAX_SWEEP_AXES } from './runSweep.js';
+export type { SweepResult, SweepRow, RunOptions, RunStats } from './runSweep.js';
+export { parseVarySpec, resolveVaryAxis } from './varySpec.js';
+export type { SweepAxis, VarySpec } from './varySpec.js';
+export { parseToleranceSpec, resolveTolerance } from './toleranceSpec.js';
+export type { ToleranceField, ToleranceSpec } from './toleranceSpec.js';
+export { runTolerance, DEFAULT_TOLERANCE_SAMPLES } from './runTolerance.js';
+export type { ToleranceOptions, ToleranceResult } from './runTolerance.js';
+export { solveVoltage, DEFAULT_FIELD_REL_TOL } from './solveVoltage.js';
+export type { VoltageSolve, VoltageSolveOptions } from './solveVoltage.js';
+export { sizeBank } from './sizeBank.js';
+export type { SizeBankOptions, SizeResult, BankCandidate, Binding } from './sizeBank.js';
+export { unitBuild } from './unitBuild.js';
+export type { CapacitorUnit, UnitBuild } from './unitBuild.js';
+export { findRoot } from './findRoot.js';
+export type { PointOutcome, PointResult } from './evaluateDesign.js';
+export { sweepToCsv, sweepToJson, sweepToText, sweepMapInput } from './sweepOutput.js';
+export { sizeToText, sizeToJson, UNIT_BUILD_RULES } from './sizeOutput.js';
+export { toleranceToText, toleranceToJson, toleranceToCsv, toleranceHistogramInput, toleranceReportHtml } from './toleranceOutput.js';

@@ -1,7 +1,7 @@
 /**
  * The content of a shot summary as plain tables (strings already formatted with engineering
  * units), shared by the text, Markdown and HTML renderers so the three say the same thing.
- * Values are formatted by `formatQuantity` (report/quantity.ts); labels come from FIGURES.
+ * Values are formatted by `formatQuantity` (units/format.ts); labels come from FIGURES.
  */
 import type { Station } from '../model/station.js';
 import type { PhaseName, ShotResult, Warning } from '../model/result.js';

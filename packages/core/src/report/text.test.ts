@@ -38,7 +38,8 @@ describe('formatShotText({station, result, verdict})', () => {
     expect(text).toMatch(/lost in the coil\s+\d[\d.]* kJ/);
     expect(text).toContain('solver.tolerance');
     expect(text).toContain('Verdict: FAIL');
-    expect(text).toMatch(/Switch I²t\s+3 MA²s\s+2 MA²s\s+−50 %\s+FAIL/);
+    // A²s takes no prefix: by the SI rule a prefix is raised with its unit, so "3 MA²s" would read 3e12 A²s
+    expect(text).toMatch(/Switch I²t\s+3e6 A²s\s+2e6 A²s\s+−50 %\s+FAIL/);
     expect(text).toMatch(/Coil temperature\s+150 °C\s+155 °C\s+\+3\.85 %\s+WARN/);
     expect(text).toContain('part centre');
   });

@@ -24,3 +24,20 @@ describe('generated design documentation', () => {
     expect(JSON.parse(JSON.stringify(js))).toEqual(js);
   });
 });
+
+describe('designFileMarkdown() value column', () => {
+  // zod's internal type names (pipe, transform, ...) mean nothing to a user writing a design file
+  const internal = ['pipe', 'transform', 'union', 'literal', 'preprocess', 'custom', 'any', 'unknown', 'lazy', 'boolean'];
+  const kinds = designFileMarkdown()
+    .split('\n')
+    .filter((l) => l.startsWith('| `'))
+    .map((l) => l.split(' | ')[1]!.trim());
+  it('never shows a zod type name', () => {
+    expect(kinds.length).toBeGreaterThan(50);
+    for (const k of kinds) expect(internal).not.toContain(k);
+  });
+  it('describes production.insulationClass by the classes it accepts', () => {
+    const row = designFileMarkdown().split('\n').find((l) => l.startsWith('| `insulationClass` |'));
+    expect(row).toMatch(/\| one of .*`F`.*`H`/);
+  });
+});

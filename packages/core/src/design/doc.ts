@@ -8,7 +8,18 @@ import { formatQuantity } from '../units/format.js';
 import { defaultOf, quantityInfo, unwrapSchema } from './quantity-schema.js';
 import { DESIGN_SECTIONS } from './schema.js';
 
-type Def = { type: string; shape?: Record<string, unknown>; element?: unknown; innerType?: unknown; entries?: Record<string, string>; valueType?: unknown; options?: unknown[] };
+type Def = {
+  type: string;
+  shape?: Record<string, unknown>;
+  element?: unknown;
+  innerType?: unknown;
+  entries?: Record<string, string>;
+  valueType?: unknown;
+  options?: unknown[];
+  values?: unknown[];
+  in?: unknown;
+  out?: unknown;
+};
 
 function def(s: unknown): Def | undefined {
   return (unwrapSchema(s) as { _zod?: { def: Def } } | undefined)?._zod?.def;
@@ -71,6 +82,16 @@ function kindOf(field: unknown): string {
       return 'list';
     case 'object':
       return 'section';
+    case 'boolean':
+      return '`true` or `false`';
+    case 'literal':
+      return (d.values ?? []).map((v) => `\`${String(v)}\``).join(' or ');
+    case 'union':
+      return (d.options ?? []).map(kindOf).join(' or ');
+    case 'pipe':
+      // z.preprocess(f, inner) and z.x().pipe(inner): the user writes what the inner type accepts;
+      // for x.transform(f) (out is a transform) the input type is the one to describe
+      return kindOf(def(d.out)?.type === 'transform' ? d.in : d.out);
     default:
       return d.type;
   }

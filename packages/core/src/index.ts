@@ -57,6 +57,8 @@ export { seriesRlcClosedForm, rlDecayWithDrop } from './analysis/closed-form.js'
 export type { SeriesRlcResponse, Damping } from './analysis/closed-form.js';
 export { judgeShot } from './analysis/verdict.js';
 export { judgeInputsFromDesign } from './analysis/verdict-design.js';
+export { simulateDesign, withStationWarnings } from './analysis/design-shot.js';
+export type { DesignShot } from './analysis/design-shot.js';
 export { VERDICT_DEFAULTS } from './model/judge-inputs.js';
 export type { JudgeInputs, PartJudgeInput, RatingsJudgeInput, DeviceRatingInput, CapacitorRatingInput, WindingMechanicsInput, ProductionJudgeInput, BleederJudgeInput, SurgeBasis } from './model/judge-inputs.js';
 export { MAGNET_GRADES, magnetGrade, applyMagnetOverrides } from './materials/magnet-grades.js';
@@ -69,6 +71,6 @@ export { allowedSurgeCurrent_A, halfSineI2t_A2s, equivalentHalfSineDuration_s } 
 export { bleederTime_s } from './analysis/bleeder.js';
 export { penetrationFigures, skinDepth_m, PENETRATION_WARN } from './analysis/penetration.js';
 export type { PenetrationFigures, BodyPenetration, PenetrationOptions } from './analysis/penetration.js';
-export { runSweep, sizeBank, runTolerance, solveVoltage, parseVarySpec, resolveVaryAxis, parseToleranceSpec, resolveTolerance, unitBuild, findRoot } from './explore/public.js';
+export { runSweep, sizeBank, sizingTarget, runTolerance, solveVoltage, parseVarySpec, resolveVaryAxis, parseToleranceSpec, resolveTolerance, unitBuild, findRoot } from './explore/public.js';
 export { sweepToCsv, sweepToJson, sweepToText, sweepMapInput, sizeToText, sizeToJson, toleranceToText, toleranceToJson, toleranceToCsv, toleranceHistogramInput, toleranceReportHtml } from './explore/public.js';
 export type { SweepAxis, SweepResult, SweepRow, RunOptions, SizeBankOptions, SizeResult, BankCandidate, CapacitorUnit, ToleranceOptions, ToleranceResult, ToleranceField, VoltageSolve, PointOutcome } from './explore/public.js';

@@ -10,6 +10,8 @@ import { registerShot } from './shot.js';
 import { registerCheck } from './check.js';
 import { registerSchema } from './schema.js';
 import { registerHold } from './hold.js';
+import { registerSweep } from './sweep.js';
+import { registerSize } from './size.js';
 
 export type RegisterCommand = (program: Command, ctx: CliContext) => Command;
 
@@ -19,4 +21,6 @@ export const COMMANDS: RegisterCommand[] = [
   registerCheck,
   registerSchema,
   registerHold,
+  registerSweep,
+  registerSize,
 ];

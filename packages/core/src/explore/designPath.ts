@@ -33,7 +33,7 @@ function optionError(source: OptionSource, problem: string, suggestion?: string)
     path: source.option,
     value: source.value,
     expected: source.expected,
-    problem,
+    problem: `${JSON.stringify(source.value)}: ${problem}`,
     ...(suggestion !== undefined ? { suggestion } : {}),
   });
 }

@@ -9,7 +9,7 @@ export { runTolerance, DEFAULT_TOLERANCE_SAMPLES } from './runTolerance.js';
 export type { ToleranceOptions, ToleranceResult } from './runTolerance.js';
 export { solveVoltage, DEFAULT_FIELD_REL_TOL } from './solveVoltage.js';
 export type { VoltageSolve, VoltageSolveOptions } from './solveVoltage.js';
-export { sizeBank } from './sizeBank.js';
+export { sizeBank, sizingTarget } from './sizeBank.js';
 export type { SizeBankOptions, SizeResult, BankCandidate, Binding } from './sizeBank.js';
 export { unitBuild } from './unitBuild.js';
 export type { CapacitorUnit, UnitBuild } from './unitBuild.js';

@@ -24,7 +24,7 @@ export function resolveField(
 ): ResolvedField {
   const { path, value } = readDesignPath(design, pathText, source, (p) => fieldInfo(p.segments).known);
   const info = fieldInfo(path.segments);
-  const fail = (problem: string) => new InputError({ code: 'option.invalid', path: source.option, value: source.value, expected: source.expected, problem });
+  const fail = (problem: string) => new InputError({ code: 'option.invalid', path: source.option, value: source.value, expected: source.expected, problem: `${JSON.stringify(source.value)}: ${problem}` });
   if (!info.known) throw fail(`${path.text} is in the design file but not a field of the design schema`);
   if (!info.quantity) throw fail(`${path.text} is not a numeric field (it holds ${JSON.stringify(value)})`);
   if (value !== undefined && typeof value !== 'number') throw fail(`${path.text} holds ${JSON.stringify(value)}, not a number`);

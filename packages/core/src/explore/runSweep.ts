@@ -3,7 +3,8 @@
  * varied fields (varySpec.ts), on worker threads, rows kept in grid order.
  *
  * Work is sent in batches of points (one design copy per batch, not per point); the batch
- * size adapts so that each thread gets about eight batches, between 1 and 32 points each.
+ * size adapts so that each thread gets about eight batches, between 1 and 32 points each
+ * (one point per task in this thread).
  * An aborted run (Ctrl-C) returns the rows already done and says it was interrupted.
  */
 import type { Design } from '../design/schema.js';
@@ -60,7 +61,8 @@ export async function runPoints(
 ): Promise<{ rows: SweepRow[] } & RunStats> {
   const threads = options.threads ?? defaultThreads();
   const total = points.length;
-  const batch = options.batchSize ?? Math.min(32, Math.max(1, Math.ceil(total / (Math.max(1, threads) * 8))));
+  // In this thread there is no message to save: one point per task keeps Ctrl-C responsive.
+  const batch = options.batchSize ?? (threads === 0 ? 1 : Math.min(32, Math.max(1, Math.ceil(total / (threads * 8)))));
   const tasks: PointsTask[] = [];
   for (let i = 0; i < total; i += batch) tasks.push({ kind: 'points', design, paths, points: points.slice(i, i + batch) });
   let donePoints = 0;

@@ -147,7 +147,8 @@ export function sweepToText(result: SweepResult, options: { designName?: string;
   const right = header.map((_, c) => c < header.length - 2);
   const lines: string[] = [];
   lines.push(`Sweep${options.designName ? ` of "${options.designName}"` : ''}: ${result.axes.map((a) => `${a.path.text} over ${a.values.length} value${a.values.length === 1 ? '' : 's'}`).join(' × ')}`);
-  lines.push(`${result.completed} of ${result.total} points${result.interrupted ? ' (interrupted: the rows below are those completed)' : ''}, ${result.threads} worker thread${result.threads === 1 ? '' : 's'}, ${result.wallTime_s.toFixed(1)} s`);
+  const where = result.threads === 0 ? 'in the main thread' : `on ${result.threads} worker thread${result.threads === 1 ? '' : 's'}`;
+  lines.push(`${result.completed} of ${result.total} points${result.interrupted ? ' (interrupted: the rows below are those completed)' : ''}, ${where}, ${result.wallTime_s.toFixed(1)} s`);
   lines.push('');
   lines.push(padTable(table, right));
   // The safety notice, for the most energetic point of the sweep.

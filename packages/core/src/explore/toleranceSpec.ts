@@ -36,7 +36,7 @@ function tolError(text: string, problem: string, suggestion?: string): InputErro
     path: '--tolerance',
     value: text,
     expected: TOLERANCE_EXPECTED,
-    problem,
+    problem: `${JSON.stringify(text)}: ${problem}`,
     ...(suggestion !== undefined ? { suggestion } : {}),
   });
 }

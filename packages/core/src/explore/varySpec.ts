@@ -54,7 +54,7 @@ function varyError(text: string, problem: string, suggestion?: string): InputErr
     path: '--vary',
     value: text,
     expected: VARY_EXPECTED,
-    problem,
+    problem: `${JSON.stringify(text)}: ${problem}`,
     ...(suggestion !== undefined ? { suggestion } : {}),
   });
 }
@@ -122,7 +122,7 @@ export function resolveVaryAxis(spec: VarySpec, design: unknown, fieldInfo?: (se
         path: '--vary',
         value: spec.text,
         expected: `${r.expected} for ${path.text}`,
-        problem: `${r.reason} (value "${token}" for ${path.text})`,
+        problem: `${JSON.stringify(spec.text)}: ${r.reason} (value "${token}" for ${path.text})`,
         ...(r.suggestion !== undefined ? { suggestion: spec.text.replace(token, r.suggestion) } : {}),
       });
     }

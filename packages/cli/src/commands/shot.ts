@@ -6,21 +6,16 @@
  */
 import type { Command } from 'commander';
 import {
-  designToStation,
   formatShotText,
-  judgeInputsFromDesign,
-  judgeShot,
   loadDesign,
   pulsePlotSvg,
   shotReportHtml,
   shotReportMarkdownFiles,
   shotToJsonString,
-  simulateShot,
+  simulateDesign,
   waveformToCsv,
   writeOutputFile,
-  type Design,
   type ShotResult,
-  type Station,
   type Verdict,
 } from '@fluxkick/core';
 import { EXIT_ENGINEERING_FAIL, type CliContext } from '../context.js';
@@ -36,11 +31,6 @@ export interface ShotOptions {
   color?: boolean;
 }
 
-/** Verdict on a shot from the design's check sections (part, ratings, production, bleeder). */
-export function shotVerdict(design: Design, station: Station, result: ShotResult): Verdict | null {
-  return judgeShot(station, judgeInputsFromDesign(design), result);
-}
-
 /** True when the shot fails engineering checks or the engine reports an error (for --strict). */
 export function isEngineeringFail(verdict: Verdict | null, result: ShotResult): boolean {
   return verdict?.overall === 'fail' || result.warnings.some((w) => w.severity === 'error');
@@ -49,10 +39,8 @@ export function isEngineeringFail(verdict: Verdict | null, result: ShotResult): 
 /** Simulate the design at `designPath` and print/write what the options ask for. Shared by `shot` and `demo`. */
 export function runShot(ctx: CliContext, designPath: string, opts: ShotOptions, shownName = designPath): void {
   const path = ctx.resolvePath(designPath);
-  const design = loadDesign(path);
-  const station = designToStation(design, shownName);
-  const result = simulateShot(station);
-  const verdict = shotVerdict(design, station, result);
+  // station, shot with the station's own warnings (a yoke table's range), verdict: one library call
+  const { station, result, verdict } = simulateDesign(loadDesign(path), shownName);
 
   if (opts.csv !== undefined) {
     writeOutputFile(ctx.resolvePath(opts.csv), waveformToCsv(result), { inputs: [path], field: '--csv' });

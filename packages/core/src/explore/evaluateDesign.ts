@@ -1,7 +1,8 @@
 /**
  * One what-if point: a design (parsed, SI) → validated again by the design schema (so a swept
  * value out of a field's range is caught with its path) → Station → one simulated shot with
- * figures only (no waveform samples) → the verdict. The unit of work of sweeps, tolerance runs
+ * figures only (no waveform samples), plus the station's own warnings (a yoke coil's table,
+ * analysis/design-shot.ts) → the verdict. The unit of work of sweeps, tolerance runs
  * and sizing, in this thread or on a worker thread.
  *
  * Returned rows are plain data (structured-clone safe): the shot's figures, each verdict item's
@@ -14,6 +15,7 @@ import { isInputError, formatInputError } from '../design/errors.js';
 import { simulateShot } from '../solve/shot.js';
 import { judgeShot } from '../analysis/verdict.js';
 import { judgeInputsFromDesign } from '../analysis/verdict-design.js';
+import { withStationWarnings } from '../analysis/design-shot.js';
 import type { ShotFigures } from '../model/result.js';
 import type { VerdictStatus } from '../model/verdict.js';
 import { withDesignValues, type DesignPath } from './designPath.js';
@@ -41,7 +43,7 @@ export function evaluateDesign(design: Design): PointResult {
   const valid = parseWithSchema(designSchema, design);
   const station = designToStation(valid);
   station.solver = { ...station.solver, samples: 0 };
-  const shot = simulateShot(station);
+  const shot = withStationWarnings(station, simulateShot(station));
   const verdict = judgeShot(station, judgeInputsFromDesign(valid), shot);
   return {
     figures: shot.figures,

@@ -59,8 +59,6 @@ export { judgeShot } from './analysis/verdict.js';
 export { judgeInputsFromDesign } from './analysis/verdict-design.js';
 export { simulateDesign, withStationWarnings } from './analysis/design-shot.js';
 export type { DesignShot } from './analysis/design-shot.js';
-export { simulateDesign, withStationWarnings } from './analysis/design-shot.js';
-export type { DesignShot } from './analysis/design-shot.js';
 export { VERDICT_DEFAULTS } from './model/judge-inputs.js';
 export type { JudgeInputs, PartJudgeInput, RatingsJudgeInput, DeviceRatingInput, CapacitorRatingInput, WindingMechanicsInput, ProductionJudgeInput, BleederJudgeInput, SurgeBasis } from './model/judge-inputs.js';
 export { MAGNET_GRADES, magnetGrade, applyMagnetOverrides } from './materials/magnet-grades.js';

@@ -23,19 +23,21 @@
  * Zero source inductance in 'both' (ESL = 0 with the diode at the bank end): the source mesh is
  * algebraic, v − (R_s + r_T)·i_s − V_T0 + V_F0 + r_F·(i_L − i_s) = 0; its time derivative
  * (R_s + r_T + r_F)·di_s/dt − r_F·di_L/dt = −i_s/C replaces the source row (index reduction,
- * consistent at the diode-on event where i_d = 0). If R_s + r_T + r_F is also zero the mode is
- * singular and setMode reports it.
+ * consistent at the diode-on event where i_d = 0). If (R_s + r_T + r_F)·C is below
+ * `instantCommutation_s` the commutation is instantaneous: setMode reports the mode as singular.
  */
 import type { Rhs } from '../solve/integrator.js';
 import { modeKind, type Mode, type ModeKind } from './modes.js';
 import type { Network } from './network.js';
 import { luFactor, luSolve, invert } from './small-lu.js';
-import { E_CABLE, E_DIODE, E_ESR, E_SW, I2T_D, I2T_SW, IL, IS, LOOP0, TH_COIL, V, stateSize } from './state.js';
+import { ACC_CABLE, ACC_DIODE, ACC_ESR, ACC_I2T_D, ACC_I2T_SW, ACC_SW, IL, IS, LOOP0, TH_COIL, V, dynamicCount, stateSize } from './state.js';
 
 export class CircuitRhs {
   readonly net: Network;
   readonly nLoops: number;
   readonly size: number;
+  /** Index of the first integral (E_esr) in the state. */
+  readonly accBase: number;
   mode: Mode = { sw: 1, diode: false };
   kind: ModeKind = 'series';
   /** Size of the reduced system of the current mode. */
@@ -45,6 +47,12 @@ export class CircuitRhs {
   /** Offset of the loops in the reduced system. */
   private loopOff = 0;
   private algebraicSource = false;
+  /**
+   * Without inductance between switch and diode the commutation is an RC decay with
+   * τ = (R_s + r_T + r_F)·C; below this τ, s, setMode('both') reports the mode as singular and the
+   * engine commutates instantaneously. Set by the engine (1e-6 of the pulse time scale).
+   */
+  instantCommutation_s = 0;
   private readonly mat: Float64Array;
   private readonly minv: Float64Array;
   private readonly work: Float64Array;
@@ -65,6 +73,7 @@ export class CircuitRhs {
     const n = net.loops.length;
     this.nLoops = n;
     this.size = stateSize(n);
+    this.accBase = dynamicCount(n);
     const mMax = n + 2;
     this.mat = new Float64Array(mMax * mMax);
     this.minv = new Float64Array(mMax * mMax);
@@ -137,7 +146,10 @@ export class CircuitRhs {
       } else {
         this.algebraicSource = true;
         const rF = net.diode ? net.diode.rF_Ohm : 0;
-        a[0] = net.sourceR_Ohm + net.rT_Ohm + rF;
+        const rSum = net.sourceR_Ohm + net.rT_Ohm + rF;
+        // commutation time constant (R_s + r_T + r_F)·C below the threshold: instantaneous
+        if (!(rSum * net.capacitance_F >= this.instantCommutation_s)) return false;
+        a[0] = rSum;
         a[1] = -rF;
       }
     }
@@ -230,14 +242,15 @@ export class CircuitRhs {
     }
     for (let k = 0; k < n; k++) dy[LOOP0 + k] = x[off + k];
     dy[TH_COIL] = (iL * iL * rc) / net.coil.heatCapacity_JpK;
-    dy[E_ESR] = net.esr_Ohm * is * is;
-    dy[E_SW] = vsw * is;
+    const acc = this.accBase;
+    dy[acc + ACC_ESR] = net.esr_Ohm * is * is;
+    dy[acc + ACC_SW] = vsw * is;
     const ic = net.cableInSource ? is : iL;
-    dy[E_CABLE] = net.cableR_Ohm * ic * ic;
+    dy[acc + ACC_CABLE] = net.cableR_Ohm * ic * ic;
     const diodeOn = this.mode.diode;
-    dy[E_DIODE] = diodeOn ? vD * iD : 0;
-    dy[I2T_SW] = is * is;
-    dy[I2T_D] = diodeOn ? iD * iD : 0;
+    dy[acc + ACC_DIODE] = diodeOn ? vD * iD : 0;
+    dy[acc + ACC_I2T_SW] = is * is;
+    dy[acc + ACC_I2T_D] = diodeOn ? iD * iD : 0;
   }
 
   /**

@@ -32,6 +32,9 @@ export interface ModeEvent {
   slope?(y: Float64Array, dy: Float64Array): number;
 }
 
+/** Hysteresis of the bidirectional switch's turn-on, as a fraction of the charge voltage. */
+export const SWITCH_HYSTERESIS = 1e-9;
+
 /** Relative threshold of the `decayed` end condition (fraction of the stored energy). */
 export const DECAY_FRACTION = 1e-12;
 
@@ -56,7 +59,7 @@ export function modeEvents(rhs: CircuitRhs, mode: Mode): ModeEvent[] {
     }
   }
   if (sw === 0 && net.switchKind === 'bidirectional') {
-    const hysteresis = 1e-9 * net.voltage_V;
+    const hysteresis = SWITCH_HYSTERESIS * net.voltage_V;
     const vT0 = net.vT0_V;
     out.push({
       reason: 'switch-on',
@@ -89,7 +92,8 @@ export function modeAfterEvent(rhs: CircuitRhs, mode: Mode, reason: EventReason,
       if (net.switchKind === 'bidirectional' && rhs.setMode(next)) {
         rhs.eval(t, y, dy);
         const vs = rhs.switchVoltage(y, dy);
-        if (-mode.sw * vs > net.vT0_V) return { sw: mode.sw === 1 ? -1 : 1, diode: mode.diode };
+        // the same small hysteresis as the switch-on event, so a marginal drive does not flip it
+        if (-mode.sw * vs > net.vT0_V + SWITCH_HYSTERESIS * net.voltage_V) return { sw: mode.sw === 1 ? -1 : 1, diode: mode.diode };
       }
       return next;
     }
@@ -114,12 +118,26 @@ export function modeAfterEvent(rhs: CircuitRhs, mode: Mode, reason: EventReason,
 /**
  * A current event already violated at the start of a mode: the current is zero and the mode
  * would drive it negative (e.g. a switch fired with V0 below V_T0). Returns the event, or null.
+ *
+ * A slope within ±slopeTol is a grazing start (a diode taking over through an inductance starts
+ * with zero slope); then the sign of the second derivative decides, from `curvature(e)`.
  */
-export function violatedAtStart(events: ModeEvent[], y: Float64Array, dy: Float64Array): ModeEvent | null {
+export function violatedAtStart(
+  events: ModeEvent[],
+  y: Float64Array,
+  dy: Float64Array,
+  slopeTol: number,
+  curvature: (e: ModeEvent) => number,
+): ModeEvent | null {
   for (const e of events) {
     if (!e.current || !e.slope) continue;
     const g = e.g(y, dy);
-    if (g < 0 || (g === 0 && e.slope(y, dy) <= 0)) return e;
+    if (g < 0) return e;
+    if (g > 0) continue;
+    const s = e.slope(y, dy);
+    if (s > slopeTol) continue;
+    if (s < -slopeTol) return e;
+    if (!(curvature(e) > 0)) return e;
   }
   return null;
 }

@@ -23,8 +23,13 @@ export interface StepView {
   y1: Float64Array;
   /** f(t1, y1) (read only; valid during the observer call). */
   dy1: Float64Array;
-  /** Dense output: the interpolated state at t ∈ [t0, t1] written into out (length n). */
+  /**
+   * Dense output: the interpolated state at t ∈ [t0, t1] written into out (length n). Components
+   * from `denseCount` on are interpolated linearly between the step ends.
+   */
   dense(t: number, out: Float64Array): void;
+  /** Dense output of one component i < denseCount. */
+  denseComponent(i: number, t: number): number;
 }
 
 export type StepObserver = (step: StepView) => boolean;
@@ -39,6 +44,16 @@ export interface IntegrateOptions {
   initialStep?: number;
   /** Largest step, s (optional). */
   maxStep?: number;
+  /**
+   * Only the first denseCount components need accurate dense output (and enter the dense-output
+   * error control); the rest are integrals nothing else depends on. Default: all.
+   */
+  denseCount?: number;
+  /**
+   * Components (< denseCount) whose dense output is built at every step and enters the
+   * dense-output error control; the others are built only when read. Default: all.
+   */
+  denseEager?: number[];
 }
 
 export type IntegrateOutcome = 'done' | 'stopped' | 'step-limit' | 'step-too-small';

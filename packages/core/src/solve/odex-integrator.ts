@@ -71,6 +71,10 @@ export class OdexIntegrator implements Integrator {
         if (!denseFn) throw new Error('no dense output');
         for (let i = 0; i < n; i++) o[i] = denseFn(i, t);
       },
+      denseComponent(i: number, t: number) {
+        if (!denseFn) throw new Error('no dense output');
+        return denseFn(i, t);
+      },
     };
     const result = solver.solve(f, t0, Array.from(y0), tEnd, (nr, xOld, x, y, dense) => {
       if (nr === 1 || !dense) return true;

@@ -10,7 +10,7 @@
  *   temperature rise  ½CV0²/C_th (the rise if the whole bank energy went into that conductor)
  */
 import type { CircuitRhs } from '../circuit/circuit-rhs.js';
-import { E_CABLE, E_DIODE, E_ESR, E_SW, I2T_D, I2T_SW, IL, IS, TH_COIL, V, loopCurrentIndex, loopThetaIndex } from '../circuit/state.js';
+import { ACC_COUNT, ACC_I2T_D, ACC_I2T_SW, IL, IS, TH_COIL, V, accIndex, loopCurrentIndex, loopThetaIndex } from '../circuit/state.js';
 
 export interface Scales {
   current_A: number;
@@ -31,13 +31,10 @@ export function stateScales(rhs: CircuitRhs): Scales {
   s[IS] = I;
   s[IL] = I;
   s[TH_COIL] = E / net.coil.heatCapacity_JpK;
-  s[E_ESR] = E;
-  s[E_SW] = E;
-  s[E_CABLE] = E;
-  s[E_DIODE] = E;
-  s[I2T_SW] = I * I * T;
-  s[I2T_D] = I * I * T;
   const n = rhs.nLoops;
+  for (let a = 0; a < ACC_COUNT; a++) s[accIndex(n, a)] = E;
+  s[accIndex(n, ACC_I2T_SW)] = I * I * T;
+  s[accIndex(n, ACC_I2T_D)] = I * I * T;
   for (let k = 0; k < n; k++) {
     const l = net.loops[k];
     s[loopCurrentIndex(k)] = I * Math.max(Math.abs(l.mutualToCoil_H) / l.inductance_H, 1e-3);

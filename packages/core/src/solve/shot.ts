@@ -27,16 +27,18 @@ import { modeAfterEvent, modeEvents, violatedAtStart, DECAY_FRACTION, type ModeE
 import { modeKind, phaseName, type Mode } from '../circuit/modes.js';
 import { buildNetwork } from '../circuit/network.js';
 import {
-  E_CABLE,
-  E_DIODE,
-  E_ESR,
-  E_SW,
-  I2T_D,
-  I2T_SW,
+  ACC_CABLE,
+  ACC_DIODE,
+  ACC_ESR,
+  ACC_I2T_D,
+  ACC_I2T_SW,
+  ACC_SW,
   IL,
   IS,
   TH_COIL,
   V,
+  accIndex,
+  dynamicCount,
   loopCurrentIndex,
   loopThetaIndex,
 } from '../circuit/state.js';
@@ -45,8 +47,9 @@ import { DEFAULT_SOLVER, type Station } from '../model/station.js';
 import { brentZero } from './brent.js';
 import { ExtremumTracker, type DenseProbe, type Quantity } from './extrema.js';
 import type { IntegrateOptions, Integrator, StepView } from './integrator.js';
-import { chooseIntegrator } from './choose-integrator.js';
+import { chooseIntegrator, releaseIntegrator } from './choose-integrator.js';
 import { stateScales } from './scales.js';
+import { CurveLog } from './curve-log.js';
 import { StepLog } from './step-log.js';
 
 export interface SimulateOptions {
@@ -54,7 +57,7 @@ export interface SimulateOptions {
   integrator?: Integrator;
 }
 
-type EndReason = 'current-zero' | 'decayed' | 't-max' | 'step-limit' | 'step-too-small';
+type EndReason = 'current-zero' | 'decayed' | 't-max' | 'step-limit' | 'step-too-small' | 'chattering';
 
 export function simulateShot(station: Station, options: SimulateOptions = {}): ShotResult {
   const wall0 = performance.now();
@@ -64,10 +67,19 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const N = rhs.size;
   const nLoops = rhs.nLoops;
   const scales = stateScales(rhs);
+  rhs.instantCommutation_s = 1e-6 * scales.time_s;
   const integrator = options.integrator ?? chooseIntegrator(settings.method, rhs, scales);
   const absTol = new Float64Array(N);
   for (let i = 0; i < N; i++) absTol[i] = settings.absTol * scales.state[i];
-  const intOpts: IntegrateOptions = { relTol: settings.relTol, absTol, maxSteps: settings.maxSteps };
+  const intOpts: IntegrateOptions = {
+    relTol: settings.relTol,
+    absTol,
+    maxSteps: settings.maxSteps,
+    denseCount: dynamicCount(nLoops),
+    // dense output built at every step (and error-controlled) for the coil and loop currents;
+    // the other components only when an event or a peak is bracketed
+    denseEager: [IL, ...net.loops.map((_, k) => loopCurrentIndex(k))],
+  };
   const eventTol = settings.eventTol_s;
   const tMax = settings.tMax_s;
   const E0 = net.storedEnergy_J;
@@ -121,6 +133,14 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       return (jvDy[IS] - d[IS]) / hJv;
     },
   };
+  // slope of a current event along the solution a short time ahead, for grazing starts
+  const slopeTol = 1e-9 * (scales.current_A / scales.time_s);
+  const curvature = (e: ModeEvent): number => {
+    if (!e.slope) return 0;
+    for (let i = 0; i < N; i++) jvY[i] = y[i] + hJv * dy[i];
+    rhs.eval(t + hJv, jvY, jvDy);
+    return (e.slope(jvY, jvDy) - e.slope(y, dy)) / hJv;
+  };
   const coilTracker = new ExtremumTracker({ value: (yy) => yy[IL], slope: (_yy, d) => d[IL] }, probe, eventTol);
   const switchTracker = new ExtremumTracker({ value: (yy) => yy[IS], slope: (_yy, d) => d[IS] }, probe, eventTol);
   const diodeTracker = new ExtremumTracker(
@@ -142,7 +162,10 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   let minCapV = net.voltage_V;
 
   // ---- phase loop ------------------------------------------------------------------------------
-  const log = new StepLog(N);
+  // the step log is only needed to sample the waveform afterwards
+  const keepLog = settings.samples > 0;
+  const log = new StepLog(N, keepLog ? 64 : 1);
+  const coilCurve = new CurveLog();
   const phases: PhaseRecord[] = [];
   const phaseModes: Mode[] = [];
   let mode: Mode = { sw: 1, diode: false };
@@ -163,28 +186,48 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const prevY = new Float64Array(N);
   let hitIndex = -1;
   let hitT = 0;
+  let hitStepT0 = 0;
+  let firstStep = true;
+  let zeroLength = 0;
   const hitY = new Float64Array(N);
   const hitDy = new Float64Array(N);
   const lastY = new Float64Array(N);
   let lastT = 0;
   const gBuf = new Float64Array(8);
 
+  const sampleCoil = (tt: number): number => view!.denseComponent(IL, tt);
   const observer = (s: StepView): boolean => {
     view = s;
-    log.push(s.t0, s.t1, phaseIndex, prevY);
+    if (keepLog) log.push(s.t0, s.t1, phaseIndex, prevY);
     // events at the step end
     let best = -1;
     let bestT = Infinity;
     for (let e = 0; e < events.length; e++) {
       const g1 = events[e].g(s.y1, s.dy1);
       gBuf[e] = g1;
-      if (armed[e] && g1 <= 0) {
+      if (g1 <= 0 && (armed[e] || firstStep)) {
         const ev = events[e];
         const gAt = (tt: number) => {
           probe.at(tt);
           return ev.g(probe.y, probe.dy);
         };
-        const tr = brentZero(gAt, s.t0, s.t1, gPrev[e], g1, eventTol, 200, 'nonpositive');
+        let ta = s.t0;
+        let ga = gPrev[e];
+        if (!armed[e]) {
+          // not armed at the phase start (g = 0 there, e.g. a current just set to zero): look for
+          // a positive value inside the step to bracket the crossing; none means the mode could
+          // not hold even for a moment, so the event is at the start of the phase
+          ga = 0;
+          for (let q = 1; q < 8 && !(ga > 0); q++) {
+            const tq = s.t0 + ((s.t1 - s.t0) * q) / 8;
+            const gq = gAt(tq);
+            if (gq > 0) {
+              ta = tq;
+              ga = gq;
+            }
+          }
+        }
+        const tr = ga > 0 ? brentZero(gAt, ta, s.t1, ga, g1, eventTol, 200, 'nonpositive') : s.t0;
         if (tr < bestT) {
           bestT = tr;
           best = e;
@@ -196,17 +239,21 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       hitY.set(probe.y);
       hitDy.set(probe.dy);
       hitT = bestT;
+      hitStepT0 = s.t0;
       hitIndex = best;
       for (const tr of trackers) tr.step(s.t0, bestT, hitY, hitDy);
       if (hitY[V] < minCapV) minCapV = hitY[V];
+      coilCurve.push(s.t0, bestT, sampleCoil);
       return false;
     }
     for (let e = 0; e < events.length; e++) {
       gPrev[e] = gBuf[e];
       if (gBuf[e] > 0) armed[e] = true;
     }
+    firstStep = false;
     for (const tr of trackers) tr.step(s.t0, s.t1, s.y1, s.dy1);
     if (s.y1[V] < minCapV) minCapV = s.y1[V];
+    coilCurve.push(s.t0, s.t1, sampleCoil);
     prevY.set(s.y1);
     prevT = s.t1;
     lastY.set(s.y1);
@@ -217,31 +264,43 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   for (;;) {
     // settle the mode: apply any current event already violated at the start
     let finished = false;
+    let singular = false;
     for (let guard = 0; ; guard++) {
       if (modeKind(mode) === 'open' && nLoops === 0) {
         finished = true;
         break;
       }
       if (!rhs.setMode(mode)) {
-        // zero inductance and zero resistance between switch and diode: the commutation is
+        if (modeKind(mode) !== 'both') {
+          warnings.push({
+            code: 'circuit.singular',
+            message: `The inductance matrix of the ${phaseName(mode)} phase is singular (a loop coupled with k = 1?); the shot stops at t = ${t.toPrecision(4)} s.`,
+            severity: 'error',
+          });
+          singular = true;
+          break;
+        }
+        // no inductance and next to no resistance between switch and diode: the commutation is
         // instantaneous; the switch current drops to zero at once (no energy is stored there)
-        warnings.push({
-          code: 'circuit.instant-commutation',
-          message:
-            'No inductance and no resistance between the switch and the freewheel diode: the commutation was taken as instantaneous.',
-          severity: 'info',
-        });
+        if (!warnings.some((w) => w.code === 'circuit.instant-commutation')) {
+          warnings.push({
+            code: 'circuit.instant-commutation',
+            message:
+              'No inductance and next to no resistance between the switch and the freewheel diode: the commutation was taken as instantaneous.',
+            severity: 'info',
+          });
+        }
         y[IS] = 0;
         mode = { sw: 0, diode: true };
         continue;
       }
       events = modeEvents(rhs, mode);
       rhs.eval(t, y, dy);
-      const bad = guard < 8 ? violatedAtStart(events, y, dy) : null;
+      const bad = guard < 8 ? violatedAtStart(events, y, dy, slopeTol, curvature) : null;
       if (!bad) break;
       mode = modeAfterEvent(rhs, mode, bad.reason, t, y, dy);
     }
-    if (finished) break;
+    if (finished || singular) break;
     rhs.setMode(mode);
     rhs.eval(t, y, dy);
     phaseIndex = phases.length;
@@ -253,12 +312,21 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       gPrev[i] = g0;
       return g0 > 0;
     });
+    // nothing left to decay at the start of this phase (e.g. loops without current): the shot ends
+    const decayedAt = events.findIndex((e) => e.reason === 'decayed');
+    if (decayedAt >= 0 && !armed[decayedAt]) {
+      phases.pop();
+      phaseModes.pop();
+      endReason = 'decayed';
+      break;
+    }
     for (const tr of trackers) tr.start(t, y, dy);
     prevT = t;
     prevY.set(y);
     lastY.set(y);
     lastT = t;
     hitIndex = -1;
+    firstStep = true;
     if (t >= tMax) {
       phases[phaseIndex].endReason = 't-max';
       endReason = 't-max';
@@ -271,6 +339,37 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     const conducting = modeKind(mode) !== 'open';
     if (res.outcome === 'stopped' && hitIndex >= 0) {
       eventCount++;
+      // the state at the event: integrate the cut step again from its start to the event time
+      // (a step no longer than one already accepted), so that it carries the integrator's own
+      // accuracy rather than the dense output's, and the loss integrals come with it
+      if (hitT > hitStepT0) {
+        const r2 = integrator.integrate(
+          rhs.eval,
+          hitStepT0,
+          prevY,
+          hitT,
+          (s) => {
+            hitY.set(s.y1);
+            return true;
+          },
+          { ...intOpts, initialStep: hitT - hitStepT0 },
+        );
+        evaluations += r2.evaluations;
+      }
+      zeroLength = hitT > phases[phaseIndex].start_s ? 0 : zeroLength + 1;
+      if (zeroLength > 20) {
+        warnings.push({
+          code: 'solver.chattering',
+          message: `The switch and diode changed state 20 times at t = ${hitT.toPrecision(6)} s without the time advancing; the shot stops there.`,
+          severity: 'error',
+        });
+        phases[phaseIndex].end_s = hitT;
+        phases[phaseIndex].endReason = 'chattering';
+        endReason = 'chattering';
+        y.set(hitY);
+        t = hitT;
+        break;
+      }
       t = hitT;
       y.set(hitY);
       const reason = events[hitIndex].reason;
@@ -353,51 +452,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   // ---- pulse widths by level crossings of the coil current -------------------------------------
   const sgn = coilTracker.valueAtMax < 0 ? -1 : 1;
   const tPk = coilTracker.time;
-  const ilAtStart = (k: number) => sgn * log.startValue(k, IL);
-  const crossingIn = (k: number, level: number, ta: number, tb: number): number => {
-    let found = Number.NaN;
-    const tmp = new Float64Array(N);
-    replay(k, (s) => {
-      if (!Number.isNaN(found)) return;
-      const a = Math.max(s.t0, ta);
-      const b = Math.min(s.t1, tb);
-      if (!(b > a)) return;
-      const f = (tt: number) => {
-        s.dense(tt, tmp);
-        return sgn * tmp[IL] - level;
-      };
-      const fa = f(a);
-      const fb = f(b);
-      if (fa * fb <= 0) found = brentZero(f, a, b, fa, fb, eventTol);
-    });
-    return found;
-  };
-  const crossing = (level: number, side: 'rise' | 'fall'): number => {
-    if (log.count === 0) return Number.NaN;
-    if (side === 'rise') {
-      let k = -1;
-      for (let j = 0; j < log.count && log.t0[j] < tPk; j++) if (ilAtStart(j) < level) k = j;
-      if (k < 0) return Number.NaN;
-      const tb = Math.min(stepEnd(k), tPk);
-      const tc = crossingIn(k, level, log.t0[k], tb);
-      return Number.isNaN(tc) ? log.t0[k] : tc;
-    }
-    for (let j = 0; j < log.count; j++) {
-      if (log.t0[j] > tPk && ilAtStart(j) < level) {
-        const k = Math.max(0, j - 1);
-        const ta = Math.max(log.t0[k], tPk);
-        const tc = crossingIn(k, level, ta, log.t0[j]);
-        return Number.isNaN(tc) ? log.t0[j] : tc;
-      }
-    }
-    if (sgn * y[IL] < level) {
-      const k = log.count - 1;
-      const ta = Math.max(log.t0[k], tPk);
-      const tc = crossingIn(k, level, ta, tEnd);
-      return Number.isNaN(tc) ? tEnd : tc;
-    }
-    return Number.NaN;
-  };
+  const crossing = (level: number, side: 'rise' | 'fall'): number => coilCurve.crossing(level, sgn, side, tPk, eventTol);
   const peakAbs = coilTracker.maxAbs;
   const fwhm = widthAtLevel(peakAbs, 0.5, crossing, tEnd);
   const t90 = widthAtLevel(peakAbs, 0.9, crossing, tEnd);
@@ -408,11 +463,11 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     initial_J: E0,
     capacitorFinal_J: 0.5 * net.capacitance_F * y[V] * y[V],
     inductorFinal_J: activeEnergy,
-    esr_J: y[E_ESR],
-    switch_J: y[E_SW],
-    cable_J: y[E_CABLE],
+    esr_J: y[accIndex(nLoops, ACC_ESR)],
+    switch_J: y[accIndex(nLoops, ACC_SW)],
+    cable_J: y[accIndex(nLoops, ACC_CABLE)],
     coil_J: net.coil.heatCapacity_JpK * y[TH_COIL],
-    diode_J: y[E_DIODE],
+    diode_J: y[accIndex(nLoops, ACC_DIODE)],
     loops_J: loopsJ,
   });
   if (energy.relativeError > ENERGY_BALANCE_WARN) {
@@ -437,8 +492,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     chargeVoltage_V: net.voltage_V,
     finalCapacitorVoltage_V: y[V],
     minCapacitorVoltage_V: minCapV,
-    i2tSwitch_A2s: y[I2T_SW],
-    i2tDiode_A2s: y[I2T_D],
+    i2tSwitch_A2s: y[accIndex(nLoops, ACC_I2T_SW)],
+    i2tDiode_A2s: y[accIndex(nLoops, ACC_I2T_D)],
     peakSwitchCurrent_A: switchTracker.maxAbs,
     peakDiodeCurrent_A: diodeTracker.maxAbs,
     peakDidt_Aps: didtTracker.maxAbs,
@@ -454,6 +509,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       severity: 'error',
     });
   }
+
+  if (!options.integrator) releaseIntegrator(integrator);
 
   return {
     figures,

@@ -1,0 +1,583 @@
+/**
+ * Gragg–Bulirsch–Stoer extrapolation with step-size and order control and dense output:
+ * the ODEX algorithm of E. Hairer and G. Wanner (E. Hairer, S. P. Nørsett, G. Wanner,
+ * *Solving Ordinary Differential Equations I*, 2nd ed., Springer 1993, §II.9; dense output
+ * after Hairer & Ostermann 1990, same section), written allocation-free for the engine's
+ * many short integrations.
+ *
+ * Method: the explicit midpoint rule with n_j = 2, 6, 10, 14, … substeps (sequence 4j − 2,
+ * which the dense output needs), Richardson extrapolation in h² (Aitken–Neville table), error
+ * estimate from the last two table columns, step size and order from the work per unit step.
+ * Dense output: Hermite interpolation of the step ends, corrected by extrapolated derivatives at
+ * the midpoint (degree 2·k_c + 4 − 4 = 2·k_c), with the interpolation error estimate that rejects
+ * steps whose dense output would be poor.
+ *
+ * This is a transcription of the structure of odex 2.0.4 (npm; C. Smith's JavaScript port of
+ * ODEX.F; BSD 2-clause, notice below) onto preallocated Float64Arrays with zero-based state
+ * indices: the package allocates on every derivative call, and the engine must run thousands of
+ * shots per second. tests/reference cross-checks it against the package.
+ *
+ * odex-js: Copyright (c) 2016 Colin Smith. Redistribution and use in source and binary forms,
+ * with or without modification, are permitted provided that the following conditions are met:
+ * 1. Redistributions of source code must retain the above copyright notice, this list of
+ * conditions and the following disclaimer. 2. Redistributions in binary form must reproduce the
+ * above copyright notice, this list of conditions and the following disclaimer in the
+ * documentation and/or other materials provided with the distribution. THIS SOFTWARE IS PROVIDED
+ * BY THE COPYRIGHT HOLDERS AND CONTRIBUTORS "AS IS" AND ANY EXPRESS OR IMPLIED WARRANTIES,
+ * INCLUDING, BUT NOT LIMITED TO, THE IMPLIED WARRANTIES OF MERCHANTABILITY AND FITNESS FOR A
+ * PARTICULAR PURPOSE ARE DISCLAIMED. IN NO EVENT SHALL THE COPYRIGHT HOLDER OR CONTRIBUTORS BE
+ * LIABLE FOR ANY DIRECT, INDIRECT, INCIDENTAL, SPECIAL, EXEMPLARY, OR CONSEQUENTIAL DAMAGES
+ * (INCLUDING, BUT NOT LIMITED TO, PROCUREMENT OF SUBSTITUTE GOODS OR SERVICES; LOSS OF USE, DATA,
+ * OR PROFITS; OR BUSINESS INTERRUPTION) HOWEVER CAUSED AND ON ANY THEORY OF LIABILITY, WHETHER IN
+ * CONTRACT, STRICT LIABILITY, OR TORT (INCLUDING NEGLIGENCE OR OTHERWISE) ARISING IN ANY WAY OUT
+ * OF THE USE OF THIS SOFTWARE, EVEN IF ADVISED OF THE POSSIBILITY OF SUCH DAMAGE.
+ */
+import type { IntegrateOptions, IntegrateResult, Integrator, Rhs, StepObserver, StepView } from './integrator.js';
+
+const KM = 9; // maximal number of extrapolation columns
+const U_ROUND = 2.3e-16;
+const FAC1 = 0.02;
+const FAC2 = 4.0;
+const FAC3 = 0.8;
+const FAC4 = 0.9;
+const SAFE1 = 0.65;
+const SAFE2 = 0.94;
+const STEP_REDUCTION = 0.5;
+const IPOLDEG = 4; // interpolation: µ = 2·kc − IPOLDEG + 1
+
+/** Step numbers n_j = 4j − 2 (1-based j), the sequence that allows dense output. */
+const NJ = new Float64Array(KM + 2);
+for (let i = 1; i <= KM + 1; i++) NJ[i] = 4 * i - 2;
+/** Work a_j = 1 + Σ n_i. */
+const AW = new Float64Array(KM + 2);
+AW[1] = 1 + NJ[1];
+for (let i = 2; i <= KM + 1; i++) AW[i] = AW[i - 1] + NJ[i];
+/** Pointers into the stored midpoint derivatives. */
+const IPOINT = new Int32Array(KM + 2);
+IPOINT[1] = 0;
+for (let i = 1; i <= KM; i++) {
+  let njAdd = 4 * i - 2;
+  if (NJ[i] > njAdd) ++njAdd;
+  IPOINT[i + 1] = IPOINT[i] + njAdd;
+}
+/** Error factors of the dense output. */
+const ERRFAC = new Float64Array(2 * KM + 1);
+for (let mu = 1; mu <= 2 * KM; mu++) {
+  const errx = Math.sqrt(mu / (mu + 4)) * 0.5;
+  let prod = (1 / (mu + 4)) ** 2;
+  for (let j = 1; j <= mu; j++) prod *= errx / j;
+  ERRFAC[mu] = prod;
+}
+const LF_SAFE = 2 * KM * KM + KM;
+/** FAC1^(1/(2j − 1)), the smallest step reduction of line j. */
+const FACMIN = Float64Array.from({ length: KM + 2 }, (_, j) => (j > 0 ? FAC1 ** (1 / (2 * j - 1)) : 1));
+/** EXTRAP[j·(KM+2) + l] = (n_j/n_{l−1})² − 1, the Aitken–Neville factors. */
+const EXTRAP = new Float64Array((KM + 2) * (KM + 2));
+for (let j = 2; j <= KM + 1; j++) for (let l = 2; l <= j; l++) EXTRAP[j * (KM + 2) + l] = (NJ[j] / NJ[l - 1]) ** 2 - 1;
+/** FACNJ[kk·(2KM+2) + kmi] = (n_kk/2)^(kmi−1), scaling of the midpoint derivatives. */
+const FACNJ = new Float64Array((KM + 2) * (2 * KM + 2));
+for (let kk = 1; kk <= KM + 1; kk++) for (let kmi = 1; kmi <= 2 * KM + 1; kmi++) FACNJ[kk * (2 * KM + 2) + kmi] = (NJ[kk] / 2) ** (kmi - 1);
+// states of the step controller
+const S_START = 0;
+const S_BASIC = 1;
+const S_CONVERGENCE = 2;
+const S_HOPE = 3;
+const S_ACCEPT = 4;
+const S_REJECT = 5;
+
+function rows(r: number, c: number): Float64Array[] {
+  const a: Float64Array[] = [];
+  for (let i = 0; i <= r; i++) a.push(new Float64Array(c));
+  return a;
+}
+
+export class GbsIntegrator implements Integrator {
+  readonly name = 'odex';
+  private n = -1;
+  private y!: Float64Array;
+  private dz!: Float64Array;
+  private yh1!: Float64Array;
+  private yh2!: Float64Array;
+  private dy!: Float64Array;
+  private scal!: Float64Array;
+  private aTol!: Float64Array;
+  private t!: Float64Array[];
+  private ySafe!: Float64Array[];
+  private fSafe!: Float64Array[];
+  private dens!: Float64Array;
+  private dy1!: Float64Array;
+  private yLeft!: Float64Array;
+  private dzLeft!: Float64Array;
+  private built!: Int32Array;
+  private allCache: number[] = [];
+
+  private allDense(nd: number): number[] {
+    if (this.allCache.length !== nd) this.allCache = Array.from({ length: nd }, (_, i) => i);
+    return this.allCache;
+  }
+  private readonly hh = new Float64Array(KM + 2);
+  private readonly w = new Float64Array(KM + 2);
+  private readonly coef = new Float64Array(31);
+
+  private alloc(n: number): void {
+    if (n === this.n) return;
+    this.n = n;
+    this.y = new Float64Array(n);
+    this.dz = new Float64Array(n);
+    this.yh1 = new Float64Array(n);
+    this.yh2 = new Float64Array(n);
+    this.dy = new Float64Array(n);
+    this.scal = new Float64Array(n);
+    this.aTol = new Float64Array(n);
+    this.t = rows(KM + 1, n);
+    this.ySafe = rows(KM + 1, n);
+    this.fSafe = rows(LF_SAFE, n);
+    this.dens = new Float64Array((2 * KM + 5) * n);
+    this.dy1 = new Float64Array(n);
+    this.yLeft = new Float64Array(n);
+    this.dzLeft = new Float64Array(n);
+    this.built = new Int32Array(n);
+  }
+
+  integrate(
+    f: Rhs,
+    x0: number,
+    y0: Float64Array,
+    xEnd: number,
+    observer: StepObserver,
+    options: IntegrateOptions,
+  ): IntegrateResult {
+    const n = y0.length;
+    this.alloc(n);
+    /** components with full dense output */
+    const nd = Math.min(n, Math.max(1, options.denseCount ?? n));
+    const { y, dz, yh1, yh2, dy, scal, t, ySafe, fSafe, dens, hh, w, dy1 } = this;
+    const aTol = options.absTol;
+    const rTol = options.relTol;
+    y.set(y0);
+    let x = x0;
+    let nEval = 0;
+    let nStep = 0;
+    let nAccept = 0;
+    let nReject = 0;
+    const maxSteps = options.maxSteps;
+    const hMax = Math.abs(options.maxStep ?? xEnd - x);
+    const posneg = xEnd - x >= 0 ? 1 : -1;
+    for (let i = 0; i < n; i++) scal[i] = aTol[i] + rTol + Math.abs(y[i]);
+    let k = Math.max(2, Math.min(KM - 1, Math.floor(-Math.log10(rTol + 1e-40) * 0.6 + 1.5)));
+    let h: number;
+    if (options.initialStep !== undefined && options.initialStep > 0) {
+      h = posneg * Math.min(options.initialStep, hMax, Math.abs(xEnd - x));
+    } else {
+      h = posneg * Math.min(1e-4, hMax, Math.abs(xEnd - x) / 2);
+    }
+    let xOld = x;
+    let iPt = 0;
+    let err = 0;
+    let errOld = 1e10;
+    let hoptde = posneg * hMax;
+    w[1] = 0;
+    let reject = false;
+    let last = false;
+    let atov = false;
+    let kc = 0;
+    // dense output context of the last accepted step
+    let dXOld = 0;
+    let dH = 1;
+    let kmit = 0;
+    let stepKc = 0;
+    /** step counter for the lazily built dense components */
+    let stamp = 0;
+    const built = this.built;
+    built.fill(-1);
+    const dzLeft = this.dzLeft;
+    const eager = options.denseEager ?? this.allDense(nd);
+
+    // dense output of the last accepted step: blocks of nd values in dens; the integrals
+    // (components ≥ nd) are interpolated linearly between yLeft and y
+    const yLeft = this.yLeft;
+    const denseComponent = (i: number, xx: number): number => {
+      const theta = (xx - dXOld) / dH;
+      if (i >= nd) return yLeft[i] + theta * (y[i] - yLeft[i]);
+      if (built[i] !== stamp) buildOne(i);
+      const theta1 = 1 - theta;
+      const phthet = dens[i] + theta * (dens[nd + i] + theta1 * (dens[2 * nd + i] * theta + dens[3 * nd + i] * theta1));
+      if (kmit < 0) return phthet;
+      const thetah = theta - 0.5;
+      let ret = dens[nd * (kmit + 4) + i];
+      for (let im = kmit; im >= 1; --im) ret = dens[nd * (im + 3) + i] + (ret * thetah) / im;
+      const tt = theta * theta1;
+      return phthet + tt * tt * ret;
+    };
+    const denseAt = (xx: number, out: Float64Array): void => {
+      for (let i = 0; i < n; i++) out[i] = denseComponent(i, xx);
+    };
+    const view: StepView = { t0: x0, t1: x0, y1: y, dy1, dense: denseAt, denseComponent };
+
+    const midex = (j: number): void => {
+      const hj = h / NJ[j];
+      for (let i = 0; i < n; i++) {
+        yh1[i] = y[i];
+        yh2[i] = y[i] + hj * dz[i];
+      }
+      const m = NJ[j] - 1;
+      const njMid = (NJ[j] / 2) | 0;
+      for (let mm = 1; mm <= m; ++mm) {
+        if (mm === njMid) {
+          const sj = ySafe[j];
+          for (let i = 0; i < nd; i++) sj[i] = yh2[i];
+        }
+        f(x + hj * mm, yh2, dy);
+        if (Math.abs(mm - njMid) <= 2 * j - 1) {
+          ++iPt;
+          const fs = fSafe[iPt];
+          for (let i = 0; i < nd; i++) fs[i] = dy[i];
+        }
+        for (let i = 0; i < n; i++) {
+          const ys = yh1[i];
+          yh1[i] = yh2[i];
+          yh2[i] = ys + 2 * hj * dy[i];
+        }
+        if (mm <= 1 && j <= 2) {
+          // stability check
+          let del1 = 0;
+          let del2 = 0;
+          for (let i = 0; i < n; i++) {
+            const a = dz[i] / scal[i];
+            const b = (dy[i] - dz[i]) / scal[i];
+            del1 += a * a;
+            del2 += b * b;
+          }
+          const quot = del2 / Math.max(U_ROUND, del1);
+          if (quot > 4) {
+            ++nEval;
+            atov = true;
+            h *= STEP_REDUCTION;
+            reject = true;
+            return;
+          }
+        }
+      }
+      // final smoothing step
+      f(x + h, yh2, dy);
+      if (njMid <= 2 * j - 1) {
+        ++iPt;
+        const fs = fSafe[iPt];
+        for (let i = 0; i < nd; i++) fs[i] = dy[i];
+      }
+      const tj = t[j];
+      for (let i = 0; i < n; i++) tj[i] = (yh1[i] + yh2[i] + hj * dy[i]) / 2;
+      nEval += NJ[j];
+      if (j === 1) return;
+      // polynomial extrapolation
+      for (let l = j; l > 1; --l) {
+        const fac = EXTRAP[j * (KM + 2) + l];
+        const tl = t[l];
+        const tl1 = t[l - 1];
+        for (let i = 0; i < n; i++) tl1[i] = tl[i] + (tl[i] - tl1[i]) / fac;
+      }
+      err = 0;
+      const t1 = t[1];
+      const t2 = t[2];
+      for (let i = 0; i < n; i++) {
+        const t1i = Math.max(Math.abs(y[i]), Math.abs(t1[i]));
+        scal[i] = aTol[i] + rTol * t1i;
+        const e = (t1[i] - t2[i]) / scal[i];
+        err += e * e;
+      }
+      err = Math.sqrt(err / n);
+      if (!(err * U_ROUND < 1) || (j > 2 && err >= errOld)) {
+        atov = true;
+        h *= STEP_REDUCTION;
+        reject = true;
+        return;
+      }
+      errOld = Math.max(4 * err, 1);
+      // optimal step sizes
+      const exp0 = 1 / (2 * j - 1);
+      const facMin = FACMIN[j];
+      let fac = Math.min(FAC2 / facMin, Math.max(facMin, (err / SAFE1) ** exp0 / SAFE2));
+      fac = 1 / fac;
+      hh[j] = Math.min(Math.abs(h) * fac, hMax);
+      w[j] = AW[j] / hh[j];
+    };
+
+    // one component of the interpolation polynomial (Hermite part plus midpoint corrections)
+    const interpOne = (i: number, imit: number): void => {
+      const a = this.coef;
+      const yy = dens;
+      const y0i = yy[i];
+      const y1i = yy[2 * nd + i];
+      const yp0 = yy[nd + i];
+      const yp1 = yy[3 * nd + i];
+      const yDiff = y1i - y0i;
+      const aspl = -yp1 + yDiff;
+      const bspl = yp0 - yDiff;
+      yy[nd + i] = yDiff;
+      yy[2 * nd + i] = aspl;
+      yy[3 * nd + i] = bspl;
+      if (imit < 0) return;
+      const ph0 = (y0i + y1i) * 0.5 + 0.125 * (aspl + bspl);
+      const ph1 = yDiff + (aspl - bspl) * 0.25;
+      const ph2 = -(yp0 - yp1);
+      const ph3 = 6 * (bspl - aspl);
+      if (imit >= 1) {
+        a[1] = 16 * (yy[5 * nd + i] - ph1);
+        if (imit >= 3) {
+          a[3] = 16 * (yy[7 * nd + i] - ph3 + 3 * a[1]);
+          for (let im = 5; im <= imit; im += 2) {
+            const fac1 = (im * (im - 1)) / 2;
+            const fac2 = fac1 * (im - 2) * (im - 3) * 2;
+            a[im] = 16 * (yy[(im + 4) * nd + i] + fac1 * a[im - 2] - fac2 * a[im - 4]);
+          }
+        }
+      }
+      a[0] = (yy[4 * nd + i] - ph0) * 16;
+      if (imit >= 2) {
+        a[2] = (yy[nd * 6 + i] - ph2 + a[0]) * 16;
+        for (let im = 4; im <= imit; im += 2) {
+          const fac1 = (im * (im - 1)) / 2;
+          const fac2 = im * (im - 1) * (im - 2) * (im - 3);
+          a[im] = (yy[nd * (im + 4) + i] + a[im - 2] * fac1 - a[im - 4] * fac2) * 16;
+        }
+      }
+      for (let im = 0; im <= imit; ++im) yy[nd * (im + 4) + i] = a[im];
+    };
+
+    // Dense output of component i for the step just accepted, built on demand (the data it needs,
+    // ySafe, fSafe, t[1], stay untouched until the next step starts): every component's
+    // polynomial is independent of the others, so only what the observer reads is built.
+    const buildOne = (i: number): void => {
+      const hD = dH;
+      const kcD = stepKc;
+      const km = kmit;
+      dens[i] = yLeft[i];
+      dens[nd + i] = hD * dzLeft[i];
+      dens[2 * nd + i] = t[1][i];
+      // solution at the midpoint
+      for (let j = 2; j <= kcD; ++j) {
+        for (let l = j; l >= 2; --l) {
+          const sl = ySafe[l][i];
+          ySafe[l - 1][i] = sl + (sl - ySafe[l - 1][i]) / EXTRAP[j * (KM + 2) + l];
+        }
+      }
+      dens[4 * nd + i] = ySafe[1][i];
+      dens[3 * nd + i] = yh2[i] * hD;
+      for (let kmi = 1; kmi <= km; ++kmi) {
+        // kmi-th derivative at the midpoint
+        const kbeg = ((kmi + 1) / 2) | 0;
+        for (let kk = kbeg; kk <= kcD; ++kk) {
+          ySafe[kk][i] = fSafe[IPOINT[kk + 1] - 2 * kk + kmi][i] * FACNJ[kk * (2 * KM + 2) + kmi];
+        }
+        for (let j = kbeg + 1; j <= kcD; ++j) {
+          for (let l = j; l >= kbeg + 1; --l) {
+            const sl = ySafe[l][i];
+            ySafe[l - 1][i] = sl + (sl - ySafe[l - 1][i]) / EXTRAP[j * (KM + 2) + l];
+          }
+        }
+        dens[(kmi + 4) * nd + i] = ySafe[kbeg][i] * hD;
+        if (kmi === km) continue;
+        // differences
+        for (let kk = ((kmi + 2) / 2) | 0; kk <= kcD; ++kk) {
+          const lbeg = IPOINT[kk + 1];
+          let lend = IPOINT[kk] + kmi + 1;
+          if (kmi === 1) lend += 2;
+          for (let l = lbeg; l >= lend; l -= 2) fSafe[l][i] -= fSafe[l - 2][i];
+          if (kmi === 1) fSafe[lend - 2][i] -= dzLeft[i];
+        }
+        for (let kk = ((kmi + 2) / 2) | 0; kk <= kcD; ++kk) {
+          const lbeg = IPOINT[kk + 1] - 1;
+          const lend = IPOINT[kk] + kmi + 2;
+          for (let l = lbeg; l >= lend; l -= 2) fSafe[l][i] -= fSafe[l - 2][i];
+        }
+      }
+      interpOne(i, km);
+      built[i] = stamp;
+    };
+
+    // returns false if the observer asked to stop
+    const acceptStep = (): boolean => {
+      xOld = x;
+      x += h;
+      kmit = 2 * kc - IPOLDEG + 1;
+      stepKc = kc;
+      dXOld = xOld;
+      dH = h;
+      stamp++;
+      for (let i = 0; i < n; i++) yLeft[i] = y[i];
+      for (let i = 0; i < nd; i++) dzLeft[i] = dz[i];
+      // first derivative at the right end
+      for (let i = 0; i < n; i++) yh1[i] = t[1][i];
+      f(x, yh1, yh2);
+      ++nEval;
+      for (let e = 0; e < eager.length; e++) buildOne(eager[e]);
+      // estimation of the interpolation error (on the components built now)
+      if (kmit >= 1 && eager.length > 0) {
+        let errint = 0;
+        const off = (kmit + 4) * nd;
+        for (let e = 0; e < eager.length; e++) {
+          const i = eager[e];
+          const v = dens[off + i] / scal[i];
+          errint += v * v;
+        }
+        errint = Math.sqrt(errint / eager.length) * ERRFAC[kmit];
+        hoptde = h / Math.max(errint ** (1 / (kmit + 4)), 0.01);
+        if (errint > 10) {
+          h = hoptde;
+          x = xOld;
+          ++nReject;
+          reject = true;
+          stamp++;
+          return true;
+        }
+      }
+      const t1 = t[1];
+      for (let i = 0; i < n; i++) {
+        dz[i] = yh2[i];
+        y[i] = t1[i];
+        dy1[i] = yh2[i];
+      }
+      ++nAccept;
+      view.t0 = xOld;
+      view.t1 = x;
+      if (!observer(view)) return false;
+      // optimal order
+      let kopt: number;
+      if (kc === 2) {
+        kopt = Math.min(3, KM - 1);
+        if (reject) kopt = 2;
+      } else if (kc <= k) {
+        kopt = kc;
+        if (w[kc - 1] < w[kc] * FAC3) kopt = kc - 1;
+        if (w[kc] < w[kc - 1] * FAC4) kopt = Math.min(kc + 1, KM - 1);
+      } else {
+        kopt = kc - 1;
+        if (kc > 3 && w[kc - 2] < w[kc - 1] * FAC3) kopt = kc - 2;
+        if (w[kc] < w[kopt] * FAC4) kopt = Math.min(kc, KM - 1);
+      }
+      if (reject) {
+        k = Math.min(kopt, kc);
+        h = posneg * Math.min(Math.abs(h), Math.abs(hh[k]));
+        reject = false;
+        return true;
+      }
+      if (kopt <= kc) {
+        h = hh[kopt];
+      } else if (kc < k && w[kc] < w[kc - 1] * FAC4) {
+        h = (hh[kc] * AW[kopt + 1]) / AW[kc];
+      } else {
+        h = (hh[kc] * AW[kopt]) / AW[kc];
+      }
+      k = kopt;
+      h = posneg * Math.abs(h);
+      return true;
+    };
+
+    let state = S_START;
+    const result = (outcome: IntegrateResult['outcome']): IntegrateResult => ({
+      outcome,
+      steps: nAccept,
+      rejected: nReject,
+      evaluations: nEval,
+    });
+
+    for (;;) {
+      switch (state) {
+        case S_START: {
+          atov = false;
+          if (0.1 * Math.abs(xEnd - x) <= Math.abs(x) * U_ROUND) return result('done');
+          h = posneg * Math.min(Math.abs(h), Math.abs(xEnd - x), hMax, Math.abs(hoptde));
+          if (!(Math.abs(h) > 16 * U_ROUND * Math.max(Math.abs(x), Math.abs(xEnd - x0)))) return result('step-too-small');
+          if ((x + 1.01 * h - xEnd) * posneg > 0) {
+            h = xEnd - x;
+            last = true;
+          }
+          if (nStep === 0) {
+            f(x, y, dz);
+            ++nEval;
+          }
+          if (nStep === 0 || last) {
+            iPt = 0;
+            ++nStep;
+            let next = S_HOPE;
+            for (let j = 1; j <= k; ++j) {
+              kc = j;
+              midex(j);
+              if (atov) {
+                next = S_START;
+                break;
+              }
+              if (j > 1 && err <= 1) {
+                next = S_ACCEPT;
+                break;
+              }
+            }
+            state = next;
+            continue;
+          }
+          state = S_BASIC;
+          continue;
+        }
+        case S_BASIC: {
+          iPt = 0;
+          ++nStep;
+          if (nStep >= maxSteps) return result('step-limit');
+          kc = k - 1;
+          let again = false;
+          for (let j = 1; j <= kc; ++j) {
+            midex(j);
+            if (atov) {
+              again = true;
+              break;
+            }
+          }
+          if (again) {
+            state = S_START;
+            continue;
+          }
+          if (k === 2 || reject) state = S_CONVERGENCE;
+          else if (err <= 1) state = S_ACCEPT;
+          else if (err > ((NJ[k + 1] * NJ[k]) / 4) ** 2) state = S_REJECT;
+          else state = S_CONVERGENCE;
+          continue;
+        }
+        case S_CONVERGENCE: {
+          midex(k);
+          if (atov) {
+            state = S_START;
+            continue;
+          }
+          kc = k;
+          state = err <= 1 ? S_ACCEPT : S_HOPE;
+          continue;
+        }
+        case S_HOPE: {
+          if (err > (NJ[k + 1] / 2) ** 2) {
+            state = S_REJECT;
+            continue;
+          }
+          kc = k + 1;
+          midex(kc);
+          if (atov) state = S_START;
+          else if (err > 1) state = S_REJECT;
+          else state = S_ACCEPT;
+          continue;
+        }
+        case S_ACCEPT: {
+          if (!acceptStep()) return result('stopped');
+          state = S_START;
+          continue;
+        }
+        case S_REJECT: {
+          k = Math.min(k, kc, KM - 1);
+          if (k > 2 && w[k - 1] < w[k] * FAC3) k -= 1;
+          ++nReject;
+          h = posneg * hh[k];
+          reject = true;
+          state = S_BASIC;
+          continue;
+        }
+      }
+    }
+  }
+}

@@ -16,6 +16,12 @@ describe('runPool(tasks, options)', () => {
     expect(threads.has(0)).toBe(false); // not the main thread
   });
 
+  it('loads the TypeScript worker through tsx in each thread when not bundled', async () => {
+    const tasks = [{ x: 3, busy_ms: 0 }, { x: 4, busy_ms: 0 }];
+    const run = await runPool<unknown, { square: number }>(tasks, { threads: 1, workerFile, bundle: false });
+    expect(run.outcomes.map((o) => (o?.ok ? o.value.square : NaN))).toEqual([9, 16]);
+  });
+
   it('gives the same results in this thread (threads = 0) as on workers', async () => {
     const tasks = Array.from({ length: 6 }, (_, i) => ({ x: i - 0.5, busy_ms: 0 }));
     const pooled = await runPool(tasks, { threads: 1, workerFile });

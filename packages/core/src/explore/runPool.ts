@@ -10,15 +10,17 @@
  * - A task that throws in the worker is recorded as `{ error }` for that task; the others go on.
  *
  * The worker file: a module whose default export is `(task) => result` (may be async).
- * When it is TypeScript (running from source under tsx or vitest), the threads start
+ * When it is TypeScript (running from source under tsx or vitest), it is bundled into one ES
+ * module with esbuild and cached (bundleWorker.ts); without esbuild, the threads start
  * tsWorkerBootstrap.mjs, which registers tsx's loader inside the thread (Node 20 does not pass
- * `--import` loaders on to worker threads) and then imports the TypeScript module; built code
+ * `--import` loaders on to worker threads) and then imports the TypeScript module. Built code
  * (dist/) runs its .js worker directly. See `resolveWorkerFile`.
  */
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Tinypool } from 'tinypool';
+import { bundledWorker } from './bundleWorker.js';
 
 export interface RunPoolOptions<R> {
   /** Worker threads; 0 runs every task in this thread with `inThread`. Default: available cores. */
@@ -29,6 +31,8 @@ export interface RunPoolOptions<R> {
   inThread?: (task: unknown) => R | Promise<R>;
   /** Stop starting new tasks when aborted. */
   signal?: AbortSignal;
+  /** TypeScript workers: bundle with esbuild (default true); false loads them through tsx in each thread. */
+  bundle?: boolean;
   /** Called after each task with (completed tasks, total tasks, index of the task just finished). */
   onProgress?: (completed: number, total: number, index: number) => void;
 }
@@ -82,9 +86,13 @@ export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions
 
   if (options.workerFile === undefined) throw new Error('runPool: threads > 0 needs workerFile');
   const target = options.workerFile instanceof URL ? fileURLToPath(options.workerFile) : options.workerFile;
-  // A TypeScript worker goes through tsWorkerBootstrap.mjs, which registers tsx in the thread.
-  const viaBootstrap = /\.[cm]?ts$/.test(target);
-  const filename = viaBootstrap ? fileURLToPath(new URL('./tsWorkerBootstrap.mjs', here())) : target;
+  // A TypeScript worker (running from source): bundled into one ES module when esbuild is at hand
+  // (bundleWorker.ts), else loaded through tsWorkerBootstrap.mjs, which registers tsx in the thread.
+  const isTs = /\.[cm]?ts$/.test(target);
+  // A failed bundle (e.g. a missing module) falls back to tsx, whose load error each task then reports.
+  const bundled = isTs && options.bundle !== false ? await bundledWorker(target).catch(() => undefined) : undefined;
+  const viaBootstrap = isTs && bundled === undefined;
+  const filename = bundled ?? (viaBootstrap ? fileURLToPath(new URL('./tsWorkerBootstrap.mjs', here())) : target);
   const pool = new Tinypool({ filename, minThreads: Math.min(threads, Math.max(1, total)), maxThreads: threads });
   const wrap = (task: T): unknown => (viaBootstrap ? { module: target, task } : task);
   try {

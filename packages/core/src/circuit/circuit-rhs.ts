@@ -160,6 +160,28 @@ export class CircuitRhs {
     return invert(a, m, this.minv, this.work, this.piv, this.col);
   }
 
+  /**
+   * A quarter of the shortest oscillation period the capacitor can have in the current mode,
+   * (π/2)·√(L_eff·C), s, with L_eff the inductance the source mesh sees when every loop is
+   * shorted (1/(M⁻¹)₀₀); Infinity when no capacitor current flows or the source row is algebraic.
+   * The engine keeps integration steps below it, so a current cannot cross zero twice inside one
+   * step unseen. For a nonlinear coil the saturated incremental inductance at `iSat` is used.
+   */
+  quarterPeriod(iSat: number): number {
+    if (this.mode.sw === 0 || this.algebraicSource) return Infinity;
+    const net = this.net;
+    let lEff: number;
+    if (this.nonlinear && this.kind === 'series') {
+      lEff = net.sourceL_H + net.loadCableL_H + net.coil.nonlinear!.incrementalInductance_H(iSat);
+    } else if (this.kind === 'both') {
+      lEff = net.sourceL_H;
+    } else {
+      lEff = 1 / this.minv[0];
+    }
+    const q = 0.5 * Math.PI * Math.sqrt(lEff * net.capacitance_F);
+    return q > 0 && Number.isFinite(q) ? q : Infinity;
+  }
+
   /** Coil resistance at temperature rise θ, Ω. */
   coilResistance(theta: number): number {
     const c = this.net.coil;

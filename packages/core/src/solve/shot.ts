@@ -332,6 +332,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       endReason = 't-max';
       break;
     }
+    intOpts.maxStep = rhs.quarterPeriod(3 * scales.current_A);
+    if (!Number.isFinite(intOpts.maxStep)) intOpts.maxStep = undefined;
     const res = integrator.integrate(rhs.eval, t, y, tMax, observer, intOpts);
     steps += res.steps;
     rejected += res.rejected;

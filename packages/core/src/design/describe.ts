@@ -8,8 +8,15 @@
  * L = ESL + L_cable + L_coil, R = ESR + r_T + R_cable + R_coil(T0), C the bank;
  * Z0 = √(L/C), f0 = 1/(2π√(LC)), ζ = (R/2)·√(C/L), quarter period (π/2)·√(LC),
  * lossless peak current V0/Z0 (an upper bound of the real peak). Stored energy ½·C·V0².
+ *
+ * Yoke fixtures (Coil.nonlinear): L_coil above is the small-current inductance, which
+ * saturation lowers as the current rises, so V0/Z0 is no bound there. Instead, with
+ * dλ/di ≥ L_sat at every current (magnetics/yoke.ts, yokeInductanceLimits) the magnetic energy
+ * is at least ½·(L_ext + L_sat)·i², L_ext = ESL + L_cable, and energy conservation bounds the
+ * peak: i ≤ V0·√(C/(L_ext + L_sat)). The field bound is H_part at that current (H_part rises
+ * with i). Coupled loops are left out of both, as in the air-core figures.
  */
-import type { Station } from '../model/station.js';
+import type { NonlinearCoil, Station } from '../model/station.js';
 import { DIMENSIONS } from '../units/quantity.js';
 import { formatNumber, formatQuantity } from '../units/format.js';
 import { quantityInfo, unwrapSchema } from './quantity-schema.js';
@@ -41,9 +48,25 @@ function formatLeaf(schema: unknown, value: unknown, digits: number): string {
   }
   const d = defOf(schema);
   if (d?.type === 'record' && value && typeof value === 'object') {
-    return Object.entries(value as Record<string, unknown>)
-      .map(([k, v]) => `${k}: ${formatLeaf(d.valueType, v, digits)}`)
-      .join(', ');
+    const entries = Object.entries(value as Record<string, unknown>);
+    if (!entries.length) return 'none';
+    return entries.map(([k, v]) => `${k}: ${formatLeaf(d.valueType, v, digits)}`).join(', ');
+  }
+  if (Array.isArray(value)) {
+    if (!value.length) return 'none';
+    return value.map((item) => formatLeaf(d?.type === 'array' ? d.element : undefined, item, digits)).join('; ');
+  }
+  if (value !== null && typeof value === 'object') {
+    const sh = objectShape(schema, value);
+    if (sh) {
+      // "core: length 80 mm, area 600 mm², steel low-carbon-steel"
+      const { name, ...rest } = value as Record<string, unknown>;
+      const body = Object.entries(rest)
+        .filter(([, v]) => v !== undefined)
+        .map(([k, v]) => `${k} ${formatLeaf(sh[k], v, digits)}`)
+        .join(', ');
+      return typeof name === 'string' ? `${name}: ${body}` : body;
+    }
   }
   if (value === null) return 'none';
   if (typeof value === 'string') return value.replace(/\s+/g, ' ').trim();
@@ -75,6 +98,12 @@ function rowsOf(shape: Record<string, unknown>, value: Record<string, unknown>, 
     const sub = v !== null && typeof v === 'object' && !Array.isArray(v) ? objectShape(field, v) : undefined;
     if (sub) {
       nested.push([key, field, v as Record<string, unknown>]);
+      continue;
+    }
+    if (Array.isArray(v) && v.length) {
+      // one row per item, e.g. `members[0]  core: length 80 mm, area 600 mm², steel low-carbon-steel`
+      const d = defOf(field);
+      v.forEach((item, i) => rows.push({ path: `${path}.${key}[${i}]`, label: `${key}[${i}]`, text: formatLeaf(d?.type === 'array' ? d.element : undefined, item, digits) }));
       continue;
     }
     rows.push({ path: `${path}.${key}`, label: key, text: formatLeaf(field, v, digits) });
@@ -120,27 +149,44 @@ export function describeDesign(design: Design, digits = 4): DescribedSection[] {
 
 export interface OrientationFigures {
   storedEnergy_J: number;
+  /** ESL + L_cable + L_coil, H; for a yoke, with its small-current inductance. */
   seriesInductance_H: number;
   seriesResistance_Ohm: number;
   characteristicImpedance_Ohm: number;
   naturalFrequency_Hz: number;
   dampingRatio: number;
   quarterPeriod_s: number;
+  /** Air core: V0/Z0. Yoke: V0·√(C/(L_ext + L_sat)). Both upper bounds of the real peak (see the header). */
   losslessPeakCurrent_A: number;
+  /** Field at the part at losslessPeakCurrent_A, A/m (an upper bound as well). */
   losslessPeakField_Apm: number;
   coilHeatCapacity_JpK: number;
+  /** True when the coil is nonlinear (a yoke fixture). */
+  nonlinearCoil: boolean;
+  /** ESL + L_cable + L_sat with the yoke saturated, H; NaN for an air-core coil or a nonlinear coil that does not state L_sat. */
+  saturatedSeriesInductance_H: number;
+}
+
+/** L_sat of a nonlinear coil that states it (a YokeCoil does), else NaN. */
+function saturatedInductance_H(coil: NonlinearCoil): number {
+  const v = (coil as Partial<{ saturatedInductance_H: number }>).saturatedInductance_H;
+  return typeof v === 'number' && v > 0 ? v : Number.NaN;
 }
 
 /** Orientation figures of the series RLC discharge (see the header); not a simulation. */
 export function orientationFigures(st: Station): OrientationFigures {
   const C = st.bank.capacitance_F;
-  const L = st.bank.esl_H + st.cable.inductance_H + st.coil.inductance_H;
+  const V0 = st.bank.voltage_V;
+  const Lext = st.bank.esl_H + st.cable.inductance_H;
+  const L = Lext + st.coil.inductance_H;
   const Rcoil = st.coil.resistance20_Ohm * (1 + st.coil.tempCoeff_perK * (st.coil.initialTemperature_C - 20));
   const R = st.bank.esr_Ohm + st.switch.slopeResistance_Ohm + st.cable.resistance_Ohm + Rcoil;
   const Z0 = Math.sqrt(L / C);
-  const I = st.bank.voltage_V / Z0;
+  const nl = st.coil.nonlinear;
+  const Lsat = nl ? Lext + saturatedInductance_H(nl) : Number.NaN;
+  const I = nl ? Math.abs(V0) * Math.sqrt(C / Lsat) : V0 / Z0;
   return {
-    storedEnergy_J: 0.5 * C * st.bank.voltage_V ** 2,
+    storedEnergy_J: 0.5 * C * V0 ** 2,
     seriesInductance_H: L,
     seriesResistance_Ohm: R,
     characteristicImpedance_Ohm: Z0,
@@ -148,8 +194,10 @@ export function orientationFigures(st: Station): OrientationFigures {
     dampingRatio: (R / 2) * Math.sqrt(C / L),
     quarterPeriod_s: (Math.PI / 2) * Math.sqrt(L * C),
     losslessPeakCurrent_A: I,
-    losslessPeakField_Apm: I * (st.probes[0]?.coil_ApmPerA ?? 0),
+    losslessPeakField_Apm: nl ? (Number.isFinite(I) ? nl.fieldAtPart_Apm(I) : Number.NaN) : I * (st.probes[0]?.coil_ApmPerA ?? 0),
     coilHeatCapacity_JpK: st.coil.heatCapacity_JpK,
+    nonlinearCoil: Boolean(nl),
+    saturatedSeriesInductance_H: Lsat,
   };
 }
 
@@ -157,19 +205,39 @@ export function orientationFigures(st: Station): OrientationFigures {
 export function describeOrientation(st: Station, digits = 3): DescribedSection {
   const f = orientationFigures(st);
   const row = (label: string, text: string): DescribedRow => ({ path: label, label, text });
+  const q = (v: number, unit: string) => formatQuantity(v, unit, { digits });
+  if (!f.nonlinearCoil) {
+    return {
+      title: 'derived (series RLC, no losses in the peak; orientation only, run `shot` for the waveform)',
+      rows: [
+        row('stored energy ½CV²', q(f.storedEnergy_J, 'J')),
+        row('loop inductance', q(f.seriesInductance_H, 'H')),
+        row('loop resistance at start', q(f.seriesResistance_Ohm, 'Ω')),
+        row('characteristic impedance √(L/C)', q(f.characteristicImpedance_Ohm, 'Ω')),
+        row('natural frequency', q(f.naturalFrequency_Hz, 'Hz')),
+        row('damping ratio', formatNumber(f.dampingRatio, digits)),
+        row('quarter period (π/2)√(LC)', q(f.quarterPeriod_s, 's')),
+        row('lossless peak current V/√(L/C)', q(f.losslessPeakCurrent_A, 'A')),
+        row('lossless peak field at the part', q(f.losslessPeakField_Apm, 'A/m')),
+        row('coil heat capacity', q(f.coilHeatCapacity_JpK, 'J/K')),
+      ],
+    };
+  }
   return {
-    title: 'derived (series RLC, no losses in the peak; orientation only, run `shot` for the waveform)',
+    title:
+      'derived (yoke fixture: the coil is nonlinear; RLC figures use its small-current inductance, the peak bounds its saturated one; orientation only, run `shot` for the waveform)',
     rows: [
-      row('stored energy ½CV²', formatQuantity(f.storedEnergy_J, 'J', { digits })),
-      row('loop inductance', formatQuantity(f.seriesInductance_H, 'H', { digits })),
-      row('loop resistance at start', formatQuantity(f.seriesResistance_Ohm, 'Ω', { digits })),
-      row('characteristic impedance √(L/C)', formatQuantity(f.characteristicImpedance_Ohm, 'Ω', { digits })),
-      row('natural frequency', formatQuantity(f.naturalFrequency_Hz, 'Hz', { digits })),
-      row('damping ratio', formatNumber(f.dampingRatio, digits)),
-      row('quarter period (π/2)√(LC)', formatQuantity(f.quarterPeriod_s, 's', { digits })),
-      row('lossless peak current V/√(L/C)', formatQuantity(f.losslessPeakCurrent_A, 'A', { digits })),
-      row('lossless peak field at the part', formatQuantity(f.losslessPeakField_Apm, 'A/m', { digits })),
-      row('coil heat capacity', formatQuantity(f.coilHeatCapacity_JpK, 'J/K', { digits })),
+      row('stored energy ½CV²', q(f.storedEnergy_J, 'J')),
+      row('loop inductance, small current', q(f.seriesInductance_H, 'H')),
+      row('loop inductance, yoke saturated', q(f.saturatedSeriesInductance_H, 'H')),
+      row('loop resistance at start', q(f.seriesResistance_Ohm, 'Ω')),
+      row('characteristic impedance, small current', q(f.characteristicImpedance_Ohm, 'Ω')),
+      row('natural frequency, small current', q(f.naturalFrequency_Hz, 'Hz')),
+      row('damping ratio, small current', formatNumber(f.dampingRatio, digits)),
+      row('quarter period, small current', q(f.quarterPeriod_s, 's')),
+      row('peak current at most V·√(C/L_sat)', q(f.losslessPeakCurrent_A, 'A')),
+      row('peak field at the part at most', q(f.losslessPeakField_Apm, 'A/m')),
+      row('coil heat capacity', q(f.coilHeatCapacity_JpK, 'J/K')),
     ],
   };
 }

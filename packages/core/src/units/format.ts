@@ -7,7 +7,8 @@
  * Method: the prefix exponent is the largest multiple of 3 (pico to giga, BIPM SI Brochure,
  * 9th ed.) that leaves a mantissa of at least 1; the mantissa is rounded to `digits`
  * significant figures and, when rounding carries it to 1000, the next prefix is used.
- * Areas and volumes take the prefix on the metre (2.5e-6 m² -> "2.5 mm²",
+ * Areas and volumes take the prefix on the metre, with the centimetre allowed as engineers
+ * write pole faces and bank volumes (2.5e-6 m² -> "2.5 mm²", 6e-4 m² -> "6 cm²",
  * 2.4e-4 m³ -> "240 cm³"); a prefix is never squared by mistake.
  * Units that engineers do not prefix print as plain numbers, in exponent form outside
  * [1e-3, 1e6): °C, K, %, kg, dimensionless '' and '1', compound units such as J/(kg·K) or
@@ -76,7 +77,7 @@ export function formatQuantity(value: number, unit: string, options: FormatOptio
   const abs = Math.abs(value);
   const sign = value < 0 ? '−' : '';
   // choose exponent (a multiple of 3) of the prefix so that the mantissa is in [1, 1000)
-  const allowed = power === 1 ? [-12, -9, -6, -3, 0, 3, 6, 9] : power === 2 ? [-6, -3, 0] : [-3, -2, 0];
+  const allowed = power === 1 ? [-12, -9, -6, -3, 0, 3, 6, 9] : power === 2 ? [-6, -3, -2, 0] : [-3, -2, 0];
   let chosen = allowed[0]!;
   for (const e of allowed) if (abs / 10 ** (e * power) >= 1 - 1e-12) chosen = e;
   let mant = abs / 10 ** (chosen * power);
@@ -85,7 +86,7 @@ export function formatQuantity(value: number, unit: string, options: FormatOptio
     chosen = allowed[idx + 1]!;
     mant = abs / 10 ** (chosen * power);
   }
-  const prefix = power === 3 && chosen === -2 ? 'c' : (PREFIX[chosen] ?? '');
+  const prefix = chosen === -2 ? 'c' : (PREFIX[chosen] ?? '');
   const text = mant >= 1e-3 && mant < 1e6 ? trimNumber(mant, digits) : formatNumber(mant, digits);
   return `${sign}${text} ${prefix}${base}${suffix}`;
 }

@@ -28,7 +28,8 @@ import type { Warning } from '../model/result.js';
 import { brentZero } from '../solve/brent.js';
 import type { Design } from '../design/schema.js';
 import { InputError, type InputIssue } from '../design/errors.js';
-import { resolveThermal } from '../design/sections/thermal.js';
+import { hasThermalAmount, resolveThermal } from '../design/sections/thermal.js';
+import { fixtureBuildOf } from '../design/sections/fixture-geometry.js';
 import { DEFAULT_AMBIENT_C, steadyFromDesign } from '../design/sections/steady.js';
 import { yokeToSpec } from '../design/sections/yoke.js';
 import { yokeCurrentForPartField, yokeOperatingPoint, type YokeOperatingPoint, type YokeSpec, type YokeSteelState } from '../magnetics/yoke.js';
@@ -334,8 +335,16 @@ export function holdDesign(design: Design, overrides: HoldOverrides = {}, file?:
   if (overrides.targetField_Apm !== undefined) options.targetField_Apm = overrides.targetField_Apm;
   if (overrides.maxTemperature_C !== undefined) options.maxTemperature_C = overrides.maxTemperature_C;
 
-  const th = resolveThermal(design.coil);
-  const coil: SteadyCoil = { resistance20_Ohm: design.coil.resistance, tempCoeff_perK: th.tempCoeff_perK, heatCapacity_JpK: th.heatCapacity_JpK };
+  // a fixture section (design/sections/fixture-geometry.ts) gives what the coil section leaves out
+  const geo = fixtureBuildOf(design)?.build;
+  const th = hasThermalAmount(design.coil) ? resolveThermal(design.coil) : { tempCoeff_perK: geo?.coil.tempCoeff_perK ?? NaN, heatCapacity_JpK: geo?.coil.heatCapacity_JpK ?? NaN };
+  const coil: SteadyCoil = { resistance20_Ohm: design.coil.resistance ?? geo?.coil.resistance20_Ohm ?? NaN, tempCoeff_perK: th.tempCoeff_perK, heatCapacity_JpK: th.heatCapacity_JpK };
+  if (!Number.isFinite(coil.resistance20_Ohm) || !Number.isFinite(coil.heatCapacity_JpK)) {
+    throw new InputError(
+      { code: 'design.missing-field', path: Number.isFinite(coil.resistance20_Ohm) ? 'coil.mass' : 'coil.resistance', value: undefined, problem: 'missing', expected: 'the coil’s resistance and amount of conductor (mass, volume or heatCapacity), or a fixture section' },
+      file,
+    );
+  }
   let field: SteadyFieldLaw;
   let spec: YokeSpec | undefined;
   if (design.yoke) {
@@ -350,7 +359,7 @@ export function holdDesign(design: Design, overrides: HoldOverrides = {}, file?:
       currentForField_A: (h) => yokeCurrentForPartField(s, h).current_A,
     };
   } else {
-    const k = design.coil.fieldPerAmpere ?? NaN;
+    const k = design.coil.fieldPerAmpere ?? geo?.probes[0]?.coil_ApmPerA ?? NaN;
     field = { fieldAtPart_Apm: (i) => k * i, currentForField_A: (h) => (h > 0 ? h / k : NaN) };
   }
   const result = steadyCurrent(coil, supply, cooling, field, options);

@@ -32,6 +32,7 @@ import { partSection } from './sections/part.js';
 import { ratingsSection } from './sections/ratings.js';
 import { productionSection } from './sections/production.js';
 import { bleederSection } from './sections/bleeder.js';
+import { fixtureGeometrySection } from './sections/fixture-geometry.js';
 
 export const DESIGN_SECTIONS = {
   name: text('Name of the station or fixture, shown in reports; default: the file name').optional(),
@@ -50,6 +51,7 @@ export const DESIGN_SECTIONS = {
   ratings: ratingsSection.optional(),
   production: productionSection.optional(),
   bleeder: bleederSection.optional(),
+  fixture: fixtureGeometrySection.optional(),
   // other sections: one line each (see above)
 };
 

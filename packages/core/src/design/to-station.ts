@@ -18,6 +18,8 @@ import type { Design } from './schema.js';
 import { bankToStation } from './sections/bank.js';
 import { cableToStation } from './sections/cable.js';
 import { coilToStation } from './sections/coil.js';
+import { fixtureStationStep } from './sections/fixture-geometry.js';
+import { hasThermalAmount } from './sections/thermal.js';
 import { coupledLoopToStation } from './sections/coupled.js';
 import { freewheelToStation } from './sections/freewheel.js';
 import { solverToStation } from './sections/solver.js';
@@ -28,7 +30,7 @@ import { yokeStationStep } from './sections/yoke.js';
 export type StationStep = (design: Design, station: Station) => Station;
 
 /** Steps added by other sections, in order (one line each). */
-export const STATION_STEPS: StationStep[] = [yokeStationStep];
+export const STATION_STEPS: StationStep[] = [yokeStationStep, fixtureStationStep];
 
 /** Name given to probe 0. */
 export const PART_PROBE_NAME = 'part';
@@ -76,11 +78,16 @@ function baseStation(design: Design): { station: Station; issues: InputIssue[] }
     }
   });
 
-  // coil.inductance and coil.fieldPerAmpere may be left out only when a yoke section computes them.
-  if (!design.yoke) {
+  // coil.inductance and coil.fieldPerAmpere may be left out only when a yoke or fixture section computes them;
+  // coil.resistance and the amount of conductor only when a fixture section does.
+  if (!design.yoke && !design.fixture) {
     for (const k of ['inductance', 'fieldPerAmpere'] as const) {
-      if (design.coil[k] === undefined) issues.push(issue(`coil.${k}`, 'design.missing-field', undefined, 'missing', k === 'inductance' ? 'an inductance (H), e.g. 180 uH (or a yoke section)' : 'a field per ampere ((A/m)/A), e.g. 95 A/m/A (or a yoke section)'));
+      if (design.coil[k] === undefined) issues.push(issue(`coil.${k}`, 'design.missing-field', undefined, 'missing', k === 'inductance' ? 'an inductance (H), e.g. 180 uH (or a yoke or fixture section)' : 'a field per ampere ((A/m)/A), e.g. 95 A/m/A (or a yoke or fixture section)'));
     }
+  }
+  if (!design.fixture) {
+    if (design.coil.resistance === undefined) issues.push(issue('coil.resistance', 'design.missing-field', undefined, 'missing', 'a resistance at 20 °C (Ω), e.g. 25 mohm (or a fixture section)'));
+    if (!hasThermalAmount(design.coil)) issues.push(issue('coil.mass', 'design.missing-field', undefined, 'missing: the heating model needs the amount of conductor', 'one of mass (e.g. 2.1 kg), volume (e.g. 240 cm^3) or heatCapacity (e.g. 810 J/K) (or a fixture section)'));
   }
   const partProbe: FieldProbe = {
     name: PART_PROBE_NAME,

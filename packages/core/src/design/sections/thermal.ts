@@ -64,6 +64,21 @@ export function checkThermal(v: ThermalDesign, ctx: z.RefinementCtx): void {
   }
 }
 
+/**
+ * checkThermal for a coil whose amount of conductor may come from a `fixture` section: no issue
+ * when none of mass/volume/heatCapacity is given (to-station.ts then requires them unless the
+ * fixture geometry gives them); otherwise the same checks.
+ */
+export function checkThermalAmountOptional(v: ThermalDesign, ctx: z.RefinementCtx): void {
+  if (AMOUNT.every((k) => v[k] === undefined)) return;
+  checkThermal(v, ctx);
+}
+
+/** Whether any of mass/volume/heatCapacity is given. */
+export function hasThermalAmount(v: ThermalDesign): boolean {
+  return AMOUNT.some((k) => v[k] !== undefined);
+}
+
 /** Heat capacity (J/K), α20 (1/K) and mass (kg, when known) from checked thermal fields. */
 export function resolveThermal(v: ThermalDesign): { heatCapacity_JpK: number; tempCoeff_perK: number; mass_kg?: number } {
   const m = v.conductor ? conductor(v.conductor) : undefined;

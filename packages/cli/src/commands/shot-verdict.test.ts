@@ -7,7 +7,10 @@ import { main } from '../main.js';
 import { captureIo } from '../io.js';
 
 const ROOT = fileURLToPath(new URL('../../../../', import.meta.url));
-const DEMO = readFileSync(join(ROOT, 'examples/demo-station.yaml'), 'utf8');
+/** The demo station without its own check sections (each test appends the ones it needs). */
+const CHECKS_MARKER = '\n# The sections below feed the verdict only';
+const DEMO_FULL = readFileSync(join(ROOT, 'examples/demo-station.yaml'), 'utf8');
+const DEMO = DEMO_FULL.slice(0, DEMO_FULL.indexOf(CHECKS_MARKER));
 
 async function run(args: string[], cwd: string) {
   const io = captureIo({ cwd });
@@ -24,6 +27,27 @@ function designWith(sections: string): { dir: string; file: string } {
 }
 
 describe('fluxkick shot: the verdict', () => {
+  it('the demo station carries every check section, and this test strips them', async () => {
+    expect(DEMO_FULL.indexOf(CHECKS_MARKER)).toBeGreaterThan(0);
+    for (const s of ['part:', 'ratings:', 'production:', 'bleeder:']) {
+      expect(DEMO_FULL).toMatch(new RegExp(`^${s}`, 'm'));
+      expect(DEMO).not.toMatch(new RegExp(`^${s}`, 'm'));
+    }
+  });
+
+  it('demo: a verdict with every section judged, at most two warnings and no fail', async () => {
+    const r = await run(['demo', '--json'], mkdtempSync(join(tmpdir(), 'fk-demo-')));
+    const js = JSON.parse(r.out) as { verdict: { overall: string; items: { id: string; status: string }[] } };
+    const ids = js.verdict.items.map((i) => i.id);
+    for (const id of ['field.part', 'coil.temperature.production', 'switch.surge', 'diode.surge', 'capacitor.voltage', 'winding.hoop-stress', 'bleeder.time']) {
+      expect(ids).toContain(id);
+    }
+    const statuses = js.verdict.items.map((i) => i.status);
+    expect(statuses).not.toContain('fail');
+    expect(statuses.filter((s) => s === 'warn').length).toBeLessThanOrEqual(2);
+    expect(statuses.filter((s) => s === 'pass').length).toBeGreaterThanOrEqual(10);
+  });
+
   it('--json carries the verdict items under `verdict`', async () => {
     const { dir } = designWith('part: { grade: ndfeb-h }\nratings: { capacitor: { voltage: 2.5 kV } }\nbleeder: { resistance: 10 kohm }\n');
     const r = await run(['shot', 'station.yaml', '--json'], dir);

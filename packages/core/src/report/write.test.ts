@@ -1,9 +1,22 @@
-import { afterAll, describe, expect, it } from 'vitest';
-import { chmodSync, linkSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import { afterAll, describe, expect, it, vi } from 'vitest';
+import { linkSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { writeOutputFile } from './write.js';
 import { isInputError, type InputError } from '../design/errors.js';
+
+/** Failure injection: writeSync writes `failAfter_bytes` bytes, then fails as a full disk would (-1: off). */
+const inject = vi.hoisted(() => ({ failAfter_bytes: -1, written_bytes: 0 }));
+vi.mock('node:fs', async (importOriginal) => {
+  const fs = await importOriginal<typeof import('node:fs')>();
+  const writeSync = ((fd: number, buffer: Uint8Array, offset?: number, length?: number) => {
+    if (inject.failAfter_bytes < 0) return fs.writeSync(fd, buffer, offset, length);
+    const n = fs.writeSync(fd, buffer, offset, Math.min(length ?? buffer.length, inject.failAfter_bytes));
+    inject.written_bytes += n;
+    throw Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC' });
+  }) as typeof fs.writeSync;
+  return { ...fs, default: { ...fs, writeSync }, writeSync };
+});
 
 const dir = mkdtempSync(join(tmpdir(), 'fluxkick-write-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -60,20 +73,23 @@ describe('writeOutputFile(path, content, {inputs})', () => {
     expect(readFileSync(join(sub, 'inside'), 'utf8')).toBe('keep');
   });
 
-  // root ignores folder permissions, so this case can only be checked as an ordinary user
-  it.skipIf(process.getuid?.() === 0)('a failed write keeps the previous file intact (no partial content)', () => {
-    // a read-only folder makes the temp file impossible; the old file must stay as it was
-    const ro = join(dir, 'ro');
-    mkdirSync(ro);
-    const q = join(ro, 'c.txt');
+  // Disk full halfway through the temp file (ENOSPC injected into writeSync, see the mock above):
+  // a failure after part of the new content was written, which file permissions cannot give
+  // as root (CI runs as root), so this runs for every user.
+  it('a failed write keeps the previous file intact (no partial content)', () => {
+    const q = join(dir, 'c.txt');
     writeFileSync(q, 'old');
-    chmodSync(ro, 0o555);
+    inject.failAfter_bytes = 10;
+    inject.written_bytes = 0;
     try {
-      const e = thrown(() => writeOutputFile(q, 'new'));
+      const e = thrown(() => writeOutputFile(q, 'new content, much longer than ten bytes', { field: '--csv' }));
       expect(e.code).toBe('output.unwritable');
-      expect(readFileSync(q, 'utf8')).toBe('old');
+      expect(e.message).toContain('no space left on the device');
     } finally {
-      chmodSync(ro, 0o755);
+      inject.failAfter_bytes = -1;
     }
+    expect(inject.written_bytes).toBe(10); // the failure came after part of the content was written
+    expect(readFileSync(q, 'utf8')).toBe('old');
+    expect(readdirSync(dir).filter((f) => f.startsWith('.c.txt.') && f.endsWith('.tmp'))).toEqual([]);
   });
 });

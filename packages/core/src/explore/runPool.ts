@@ -57,34 +57,31 @@ function errorText(e: unknown): string {
   return e instanceof Error ? `${e.name}: ${e.message}` : String(e);
 }
 
-export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions<R>): Promise<PoolRun<R>> {
-  const started = performance.now();
+/** A pool of worker threads (or this thread) kept open across several runs. */
+export interface TaskPool<R> {
+  /** Worker threads (0: this thread). */
+  readonly threads: number;
+  /** Run tasks; results in task order. */
+  run<T>(tasks: readonly T[], controls?: Pick<RunPoolOptions<R>, 'signal' | 'onProgress'>): Promise<PoolRun<R>>;
+  close(): Promise<void>;
+}
+
+/**
+ * Open a pool: start the worker threads once (the TypeScript worker bundled first), to run
+ * several batches of tasks without paying the start-up again. Close it when done.
+ */
+export async function openPool<R>(options: Omit<RunPoolOptions<R>, 'signal' | 'onProgress'> & { minThreads?: number }): Promise<TaskPool<R>> {
   const threads = options.threads ?? defaultThreads();
-  const total = tasks.length;
-  const outcomes: (TaskOutcome<R> | undefined)[] = new Array(total).fill(undefined);
-  let completed = 0;
-  const aborted = () => options.signal?.aborted === true;
-  const record = (i: number, outcome: TaskOutcome<R>) => {
-    outcomes[i] = outcome;
-    completed += 1;
-    options.onProgress?.(completed, total, i);
-  };
-
   if (threads === 0) {
-    if (!options.inThread) throw new Error('runPool: threads = 0 needs inThread');
-    for (let i = 0; i < total && !aborted(); i++) {
-      try {
-        record(i, { ok: true, value: await options.inThread(tasks[i]) });
-      } catch (e) {
-        record(i, { ok: false, error: errorText(e) });
-      }
-      // Let signal handlers (Ctrl-C) and timers run between tasks.
-      await new Promise((r) => setImmediate(r));
-    }
-    return { outcomes, completed, interrupted: completed < total, threads: 0, wallTime_s: (performance.now() - started) / 1000 };
+    if (!options.inThread) throw new Error('openPool: threads = 0 needs inThread');
+    const inThread = options.inThread;
+    return {
+      threads: 0,
+      run: (tasks, controls = {}) => runTasks(tasks, controls, 0, (task) => Promise.resolve().then(() => inThread(task))),
+      close: async () => {},
+    };
   }
-
-  if (options.workerFile === undefined) throw new Error('runPool: threads > 0 needs workerFile');
+  if (options.workerFile === undefined) throw new Error('openPool: threads > 0 needs workerFile');
   const target = options.workerFile instanceof URL ? fileURLToPath(options.workerFile) : options.workerFile;
   // A TypeScript worker (running from source): bundled into one ES module when esbuild is at hand
   // (bundleWorker.ts), else loaded through tsWorkerBootstrap.mjs, which registers tsx in the thread.
@@ -93,9 +90,42 @@ export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions
   const bundled = isTs && options.bundle !== false ? await bundledWorker(target).catch(() => undefined) : undefined;
   const viaBootstrap = isTs && bundled === undefined;
   const filename = bundled ?? (viaBootstrap ? fileURLToPath(new URL('./tsWorkerBootstrap.mjs', here())) : target);
-  const pool = new Tinypool({ filename, minThreads: Math.min(threads, Math.max(1, total)), maxThreads: threads });
-  const wrap = (task: T): unknown => (viaBootstrap ? { module: target, task } : task);
-  try {
+  const pool = new Tinypool({ filename, minThreads: Math.min(threads, options.minThreads ?? threads), maxThreads: threads });
+  return {
+    threads,
+    run: (tasks, controls = {}) => runTasks(tasks, controls, threads, (task) => pool.run(viaBootstrap ? { module: target, task } : task) as Promise<R>),
+    close: () => pool.destroy(),
+  };
+}
+
+/** Feed tasks to `exec` with at most 2·threads in flight (one at a time in this thread), in order. */
+async function runTasks<T, R>(
+  tasks: readonly T[],
+  controls: Pick<RunPoolOptions<R>, 'signal' | 'onProgress'>,
+  threads: number,
+  exec: (task: T) => Promise<R>,
+): Promise<PoolRun<R>> {
+  const started = performance.now();
+  const total = tasks.length;
+  const outcomes: (TaskOutcome<R> | undefined)[] = new Array(total).fill(undefined);
+  let completed = 0;
+  const aborted = () => controls.signal?.aborted === true;
+  const record = (i: number, outcome: TaskOutcome<R>) => {
+    outcomes[i] = outcome;
+    completed += 1;
+    controls.onProgress?.(completed, total, i);
+  };
+  if (threads === 0) {
+    for (let i = 0; i < total && !aborted(); i++) {
+      try {
+        record(i, { ok: true, value: await exec(tasks[i]!) });
+      } catch (e) {
+        record(i, { ok: false, error: errorText(e) });
+      }
+      // Let signal handlers (Ctrl-C) and timers run between tasks.
+      await new Promise((r) => setImmediate(r));
+    }
+  } else {
     let next = 0;
     const window = 2 * threads;
     await new Promise<void>((resolve) => {
@@ -104,26 +134,38 @@ export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions
         while (inFlight < window && next < total && !aborted()) {
           const i = next++;
           inFlight += 1;
-          pool.run(wrap(tasks[i]!)).then(
-            (value: R) => record(i, { ok: true, value }),
-            (e: unknown) => record(i, { ok: false, error: errorText(e) }),
-          ).finally(() => {
-            inFlight -= 1;
-            if (inFlight === 0 && (next >= total || aborted())) resolve();
-            else launch();
-          });
+          exec(tasks[i]!)
+            .then(
+              (value: R) => record(i, { ok: true, value }),
+              (e: unknown) => record(i, { ok: false, error: errorText(e) }),
+            )
+            .finally(() => {
+              inFlight -= 1;
+              if (inFlight === 0 && (next >= total || aborted())) resolve();
+              else launch();
+            });
         }
         if (inFlight === 0) resolve();
       };
-      options.signal?.addEventListener('abort', () => {
+      controls.signal?.addEventListener('abort', () => {
         if (inFlight === 0) resolve();
       });
       launch();
     });
-  } finally {
-    await pool.destroy();
   }
   return { outcomes, completed, interrupted: completed < total, threads, wallTime_s: (performance.now() - started) / 1000 };
+}
+
+/** Open a pool, run the tasks, close it. */
+export async function runPool<T, R>(tasks: readonly T[], options: RunPoolOptions<R>): Promise<PoolRun<R>> {
+  const started = performance.now();
+  const pool = await openPool<R>({ ...options, minThreads: Math.max(1, tasks.length) });
+  try {
+    const run = await pool.run(tasks, options);
+    return { ...run, wallTime_s: (performance.now() - started) / 1000 };
+  } finally {
+    await pool.close();
+  }
 }
 
 /**

@@ -11,7 +11,7 @@ import type { Design } from '../design/schema.js';
 import { gridPoints } from './gridPoints.js';
 import { runExploreTask, type PointsTask } from './exploreTasks.js';
 import type { PointOutcome } from './evaluateDesign.js';
-import { defaultThreads, resolveWorkerFile, runPool } from './runPool.js';
+import { defaultThreads, openPool, resolveWorkerFile, type TaskPool } from './runPool.js';
 import type { SweepAxis } from './varySpec.js';
 
 export interface RunOptions {
@@ -22,6 +22,8 @@ export interface RunOptions {
   onProgress?: (completed: number, total: number) => void;
   /** Points per task; default adapts to the run's size. */
   batchSize?: number;
+  /** A pool already open (openExplorePool), to run several runs without starting threads again. */
+  pool?: TaskPool<unknown>;
 }
 
 export interface SweepRow {
@@ -52,6 +54,20 @@ export function exploreWorkerFile(): URL {
   return resolveWorkerFile(typeof __filename === 'string' ? undefined : import.meta.url, 'exploreWorker');
 }
 
+/**
+ * Open a pool for what-if runs: `threads` worker threads (default the cores; 0: this thread),
+ * started at once (at most `expectedTasks` of them when given). Close it when done.
+ */
+export async function openExplorePool(threads: number | undefined, expectedTasks?: number): Promise<TaskPool<unknown>> {
+  const n = threads ?? defaultThreads();
+  return openPool<unknown>({
+    threads: n,
+    ...(n > 0 ? { workerFile: exploreWorkerFile() } : {}),
+    inThread: (t) => runExploreTask(t as PointsTask),
+    ...(expectedTasks !== undefined ? { minThreads: Math.max(1, expectedTasks) } : {}),
+  });
+}
+
 /** Evaluate the design at the given points (each a list of values for `paths`); rows in input order. */
 export async function runPoints(
   design: Design,
@@ -59,35 +75,40 @@ export async function runPoints(
   points: { index: number; values: number[] }[],
   options: RunOptions = {},
 ): Promise<{ rows: SweepRow[] } & RunStats> {
-  const threads = options.threads ?? defaultThreads();
+  const pool = options.pool ?? (await openExplorePool(options.threads, points.length));
+  const threads = pool.threads;
   const total = points.length;
   // In this thread there is no message to save: one point per task keeps Ctrl-C responsive.
   const batch = options.batchSize ?? (threads === 0 ? 1 : Math.min(32, Math.max(1, Math.ceil(total / (threads * 8)))));
   const tasks: PointsTask[] = [];
   for (let i = 0; i < total; i += batch) tasks.push({ kind: 'points', design, paths, points: points.slice(i, i + batch) });
   let donePoints = 0;
-  const run = await runPool<PointsTask, PointOutcome[]>(tasks, {
-    threads,
-    ...(threads > 0 ? { workerFile: exploreWorkerFile() } : {}),
-    inThread: (t) => runExploreTask(t as PointsTask),
-    ...(options.signal ? { signal: options.signal } : {}),
-    onProgress: (_done, _all, t) => {
-      donePoints += tasks[t]!.points.length;
-      options.onProgress?.(donePoints, total);
-    },
-  });
+  const started = performance.now();
+  let run: Awaited<ReturnType<TaskPool<unknown>['run']>>;
+  try {
+    run = await pool.run(tasks, {
+      ...(options.signal ? { signal: options.signal } : {}),
+      onProgress: (_done, _all, t) => {
+        donePoints += tasks[t]!.points.length;
+        options.onProgress?.(donePoints, total);
+      },
+    });
+  } finally {
+    if (!options.pool) await pool.close();
+  }
+  const wallTime_s = (performance.now() - started) / 1000;
   const rows: SweepRow[] = [];
   let completed = 0;
   run.outcomes.forEach((o, t) => {
     const task = tasks[t]!;
     if (o === undefined) return;
     task.points.forEach((p, k) => {
-      const outcome: PointOutcome = o.ok ? o.value[k]! : { ok: false, error: o.error };
+      const outcome: PointOutcome = o.ok ? (o.value as PointOutcome[])[k]! : { ok: false, error: o.error };
       rows.push({ index: p.index, values: p.values, outcome });
       completed += 1;
     });
   });
-  return { rows, total, completed, interrupted: run.interrupted, threads: run.threads, wallTime_s: run.wallTime_s };
+  return { rows, total, completed, interrupted: run.interrupted, threads, wallTime_s };
 }
 
 /** Run a sweep over the grid of the axes. */

@@ -28,9 +28,9 @@ import type { Design } from '../design/schema.js';
 import { InputError } from '../design/errors.js';
 import { parseDesignPath, type DesignPath } from './designPath.js';
 import { evaluateDesign, type PointResult, type PointVerdictItem } from './evaluateDesign.js';
-import { runExploreTask, type VoltageTask } from './exploreTasks.js';
-import { defaultThreads, runPool } from './runPool.js';
-import { exploreWorkerFile, type RunOptions, type RunStats } from './runSweep.js';
+import type { VoltageTask } from './exploreTasks.js';
+import type { TaskPool } from './runPool.js';
+import { openExplorePool, type RunOptions, type RunStats } from './runSweep.js';
 import { DEFAULT_FIELD_REL_TOL, type VoltageSolve } from './solveVoltage.js';
 import { unitBuild, type CapacitorUnit, type UnitBuild } from './unitBuild.js';
 import { logValues } from './varySpec.js';
@@ -172,8 +172,7 @@ interface Variant {
   maxVoltage_V?: number;
 }
 
-async function solveVariants(design: Design, variants: Variant[], target: number, relTol: number, options: SizeBankOptions, progress: { done: number; total: number }): Promise<{ candidates: (BankCandidate | undefined)[]; interrupted: boolean; threads: number }> {
-  const threads = options.threads ?? defaultThreads();
+async function solveVariants(pool: TaskPool<unknown>, design: Design, variants: Variant[], target: number, relTol: number, options: SizeBankOptions, progress: { done: number; total: number }): Promise<{ candidates: (BankCandidate | undefined)[]; interrupted: boolean }> {
   const tasks: VoltageTask[] = variants.map((v) => ({
     kind: 'voltage',
     design,
@@ -181,10 +180,7 @@ async function solveVariants(design: Design, variants: Variant[], target: number
     values: v.values,
     options: { targetField_Apm: target, relTol, ...(v.maxVoltage_V !== undefined ? { maxVoltage_V: v.maxVoltage_V } : {}) },
   }));
-  const run = await runPool<VoltageTask, VoltageSolve>(tasks, {
-    threads,
-    ...(threads > 0 ? { workerFile: exploreWorkerFile() } : {}),
-    inThread: (t) => runExploreTask(t as VoltageTask),
+  const run = await pool.run(tasks, {
     ...(options.signal ? { signal: options.signal } : {}),
     onProgress: () => {
       progress.done += 1;
@@ -194,7 +190,7 @@ async function solveVariants(design: Design, variants: Variant[], target: number
   const candidates = run.outcomes.map((o, i) => {
     if (!o) return undefined;
     const v = variants[i]!;
-    const solve: VoltageSolve = o.ok ? o.value : { ok: false, reason: 'error', voltage_V: NaN, field_Apm: NaN, error: o.error, evaluations: 0 };
+    const solve: VoltageSolve = o.ok ? (o.value as VoltageSolve) : { ok: false, reason: 'error', voltage_V: NaN, field_Apm: NaN, error: o.error, evaluations: 0 };
     const base = {
       capacitance_F: v.capacitance_F,
       ...(v.build ? { build: v.build } : {}),
@@ -207,7 +203,7 @@ async function solveVariants(design: Design, variants: Variant[], target: number
     };
     return judge(base, solve, options.requirePass ?? false, v.maxVoltage_V);
   });
-  return { candidates, interrupted: run.interrupted, threads: run.threads };
+  return { candidates, interrupted: run.interrupted };
 }
 
 function better(a: BankCandidate, b: BankCandidate | undefined): boolean {
@@ -271,83 +267,86 @@ export async function sizeBank(design: Design, options: SizeBankOptions = {}): P
   const progress = { done: 0, total: 0 };
   const candidates: BankCandidate[] = [];
   let interrupted = false;
-  let threads = options.threads ?? defaultThreads();
+  const pool = options.pool ?? (await openExplorePool(options.threads));
+  const threads = pool.threads;
   const run = async (variants: Variant[]) => {
     if (variants.length === 0 || interrupted) return;
     progress.total += variants.length;
-    const r = await solveVariants(work, variants, target, relTol, options, progress);
-    threads = r.threads;
+    const r = await solveVariants(pool, work, variants, target, relTol, options, progress);
     interrupted ||= r.interrupted;
     for (const c of r.candidates) if (c) candidates.push(c);
   };
-
   let best: BankCandidate | undefined;
-  let neighbours: { label: string; candidate: BankCandidate; why: string }[] = [];
+  const neighbours: { label: string; candidate: BankCandidate; why: string }[] = [];
   let atRangeEnd = false;
 
-  if (options.unit) {
-    const unit = options.unit;
-    const maxSeries = options.maxSeries ?? 4;
-    const variants: Variant[] = [];
-    for (let s = 1; s <= maxSeries; s++) {
-      const pMin = Math.max(1, Math.ceil((range[0] * s) / unit.capacitance_F - 1e-9));
-      const pMax = Math.floor((range[1] * s) / unit.capacitance_F + 1e-9);
-      for (let p = pMin; p <= pMax; p++) {
-        const b = unitBuild(unit, s, p);
-        const paths = [P.capacitance, P.esr, P.esl, P.ratedVoltage, P.units];
-        const values = [b.capacitance_F, b.esr_Ohm, b.esl_H, b.ratedVoltage_V, p];
-        if (unit.peakCurrent_A !== undefined) {
-          paths.push(P.unitPeak);
-          values.push(unit.peakCurrent_A);
+  try {
+    if (options.unit) {
+      const unit = options.unit;
+      const maxSeries = options.maxSeries ?? 4;
+      const variants: Variant[] = [];
+      for (let s = 1; s <= maxSeries; s++) {
+        const pMin = Math.max(1, Math.ceil((range[0] * s) / unit.capacitance_F - 1e-9));
+        const pMax = Math.floor((range[1] * s) / unit.capacitance_F + 1e-9);
+        for (let p = pMin; p <= pMax; p++) {
+          const b = unitBuild(unit, s, p);
+          const paths = [P.capacitance, P.esr, P.esl, P.ratedVoltage, P.units];
+          const values = [b.capacitance_F, b.esr_Ohm, b.esl_H, b.ratedVoltage_V, p];
+          if (unit.peakCurrent_A !== undefined) {
+            paths.push(P.unitPeak);
+            values.push(unit.peakCurrent_A);
+          }
+          variants.push({ capacitance_F: b.capacitance_F, build: b, paths, values, maxVoltage_V: b.ratedVoltage_V });
         }
-        variants.push({ capacitance_F: b.capacitance_F, build: b, paths, values, maxVoltage_V: b.ratedVoltage_V });
+      }
+      if (variants.length === 0) {
+        throw new InputError({ code: 'option.invalid', path: '--capacitance', value: range, problem: `no whole build of the unit (${fmt(unit.capacitance_F, 'F')}) falls in the range`, expected: 'a range that holds at least one p·C_u/s' });
+      }
+      await run(variants);
+      candidates.sort((a, b) => a.capacitance_F - b.capacitance_F || a.build!.series - b.build!.series);
+      best = pickBest(candidates);
+      if (best) {
+        const { series: s, parallel: p } = best.build!;
+        const find = (ss: number, pp: number) => candidates.find((c) => c.build!.series === ss && c.build!.parallel === pp);
+        const nearestC = (ss: number) =>
+          candidates.filter((c) => c.build!.series === ss).sort((a, b) => Math.abs(Math.log(a.capacitance_F / best!.capacitance_F)) - Math.abs(Math.log(b.capacitance_F / best!.capacitance_F)))[0];
+        const add = (l: string, c: BankCandidate | undefined) => c && neighbours.push({ label: `${l}: ${label(c)}`, candidate: c, why: neighbourWhy(c, best!) });
+        add('one string fewer', find(s, p - 1));
+        add('one string more', find(s, p + 1));
+        add('one unit fewer in series', nearestC(s - 1));
+        add('one unit more in series', nearestC(s + 1));
+        // A neighbouring string count left out only because it falls outside the range.
+        atRangeEnd = (p > 1 && find(s, p - 1) === undefined) || find(s, p + 1) === undefined;
+      }
+    } else {
+      const firstPass = logValues(range[0], range[1], Math.max(3, options.gridCount ?? 13));
+      const variant = (C: number): Variant => ({ capacitance_F: C, paths: [P.capacitance], values: [C], ...(ratedVoltage !== undefined ? { maxVoltage_V: ratedVoltage } : {}) });
+      await run(firstPass.map(variant));
+      const capTol = options.capacitanceTol ?? 1e-3;
+      for (let round = 0; round < MAX_REFINE_ROUNDS && !interrupted; round++) {
+        candidates.sort((a, b) => a.capacitance_F - b.capacitance_F);
+        const b = pickBest(candidates);
+        if (!b) break;
+        const i = candidates.indexOf(b);
+        const lo = candidates[Math.max(0, i - 1)]!.capacitance_F;
+        const hi = candidates[Math.min(candidates.length - 1, i + 1)]!.capacitance_F;
+        if (hi / lo - 1 < 2 * capTol) break;
+        const inner = logValues(lo, hi, 6).slice(1, -1).filter((C) => !candidates.some((c) => Math.abs(c.capacitance_F / C - 1) < 1e-9));
+        await run(inner.map(variant));
+      }
+      candidates.sort((a, b) => a.capacitance_F - b.capacitance_F);
+      best = pickBest(candidates);
+      if (best) {
+        const i = candidates.indexOf(best);
+        const below = candidates[i - 1];
+        const above = candidates[i + 1];
+        if (below) neighbours.push({ label: `smaller: ${label(below)}`, candidate: below, why: neighbourWhy(below, best) });
+        if (above) neighbours.push({ label: `larger: ${label(above)}`, candidate: above, why: neighbourWhy(above, best) });
+        atRangeEnd = !below || !above;
       }
     }
-    if (variants.length === 0) {
-      throw new InputError({ code: 'option.invalid', path: '--capacitance', value: range, problem: `no whole build of the unit (${fmt(unit.capacitance_F, 'F')}) falls in the range`, expected: 'a range that holds at least one p·C_u/s' });
-    }
-    await run(variants);
-    candidates.sort((a, b) => a.capacitance_F - b.capacitance_F || a.build!.series - b.build!.series);
-    best = pickBest(candidates);
-    if (best) {
-      const { series: s, parallel: p } = best.build!;
-      const find = (ss: number, pp: number) => candidates.find((c) => c.build!.series === ss && c.build!.parallel === pp);
-      const nearestC = (ss: number) =>
-        candidates.filter((c) => c.build!.series === ss).sort((a, b) => Math.abs(Math.log(a.capacitance_F / best!.capacitance_F)) - Math.abs(Math.log(b.capacitance_F / best!.capacitance_F)))[0];
-      const add = (l: string, c: BankCandidate | undefined) => c && neighbours.push({ label: `${l}: ${label(c)}`, candidate: c, why: neighbourWhy(c, best!) });
-      add('one string fewer', find(s, p - 1));
-      add('one string more', find(s, p + 1));
-      add('one unit fewer in series', nearestC(s - 1));
-      add('one unit more in series', nearestC(s + 1));
-      // A neighbouring string count left out only because it falls outside the range.
-      atRangeEnd = (p > 1 && find(s, p - 1) === undefined) || find(s, p + 1) === undefined;
-    }
-  } else {
-    const firstPass = logValues(range[0], range[1], Math.max(3, options.gridCount ?? 13));
-    const variant = (C: number): Variant => ({ capacitance_F: C, paths: [P.capacitance], values: [C], ...(ratedVoltage !== undefined ? { maxVoltage_V: ratedVoltage } : {}) });
-    await run(firstPass.map(variant));
-    const capTol = options.capacitanceTol ?? 1e-3;
-    for (let round = 0; round < MAX_REFINE_ROUNDS && !interrupted; round++) {
-      candidates.sort((a, b) => a.capacitance_F - b.capacitance_F);
-      const b = pickBest(candidates);
-      if (!b) break;
-      const i = candidates.indexOf(b);
-      const lo = candidates[Math.max(0, i - 1)]!.capacitance_F;
-      const hi = candidates[Math.min(candidates.length - 1, i + 1)]!.capacitance_F;
-      if (hi / lo - 1 < 2 * capTol) break;
-      const inner = logValues(lo, hi, 6).slice(1, -1).filter((C) => !candidates.some((c) => Math.abs(c.capacitance_F / C - 1) < 1e-9));
-      await run(inner.map(variant));
-    }
-    candidates.sort((a, b) => a.capacitance_F - b.capacitance_F);
-    best = pickBest(candidates);
-    if (best) {
-      const i = candidates.indexOf(best);
-      const below = candidates[i - 1];
-      const above = candidates[i + 1];
-      if (below) neighbours.push({ label: `smaller: ${label(below)}`, candidate: below, why: neighbourWhy(below, best) });
-      if (above) neighbours.push({ label: `larger: ${label(above)}`, candidate: above, why: neighbourWhy(above, best) });
-      atRangeEnd = !below || !above;
-    }
+  } finally {
+    if (!options.pool) await pool.close();
   }
 
   return {

@@ -90,6 +90,15 @@ function parseYaml(text: string, fileName: string): { data: unknown; locate: Loc
 }
 
 /**
+ * The data of a YAML or JSON text (format by the file's extension) with a locator of field
+ * paths to line and column, for other input files read the same way (e.g. `fluxkick coil` specs).
+ * Syntax errors throw InputError naming the file.
+ */
+export function readStructuredText(text: string, fileName: string): { data: unknown; locate: Locate } {
+  return detectFormat(fileName) === 'json' ? parseJson(text, fileName) : parseYaml(text, fileName);
+}
+
+/**
  * Parse the text of a design file (YAML or JSON) into a `Design`: SI numbers, defaults applied.
  * Throws InputError (never anything else for bad input). `fileName` picks the format by its
  * extension and names the file in messages; a missing `name` becomes the file's base name.

@@ -41,3 +41,20 @@ describe('designFileMarkdown() value column', () => {
     expect(row).toMatch(/\| one of .*`F`.*`H`/);
   });
 });
+
+describe('designFileMarkdown() nested sections', () => {
+  const md = designFileMarkdown();
+  it('documents every nested section and list of sections under its own heading', () => {
+    for (const h of ['### `ratings.switch`', '### `ratings.capacitor`', '### `part.datasheet`', '### `yoke.members` (list; each item)', '### `steady.supply`']) {
+      expect(md).toContain(`\n${h}\n`);
+    }
+    // fields only reachable through a nested section
+    expect(md).toMatch(/\| `surgeBasis` \| one of `10ms`, `8.3ms` \| `10ms` \|/);
+    expect(md).toMatch(/\| `reverse` \| number \|/);
+  });
+  it('documents each form of a union under its fixed fields', () => {
+    expect(md).toContain('#### `fixture.windings.conductor` (shape: round)');
+    expect(md).toContain('#### `fixture.windings.conductor` (shape: rectangular)');
+    expect(md).not.toMatch(/section or section/);
+  });
+});

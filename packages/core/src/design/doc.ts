@@ -56,7 +56,7 @@ function showDefault(field: unknown): string {
   const v = d.value;
   if (q && typeof v === 'number') return q.unit ? formatQuantity(v, q.unit, { digits: 6 }) : String(v);
   if (Array.isArray(v)) return v.length ? JSON.stringify(v) : 'none';
-  if (v !== null && typeof v === 'object') return Object.keys(v).length ? JSON.stringify(v) : 'all defaults';
+  if (v !== null && typeof v === 'object') return Object.keys(v).length ? JSON.stringify(v) : def(field)?.type === 'record' ? 'none' : 'all defaults';
   return `\`${String(v)}\``;
 }
 
@@ -87,7 +87,7 @@ function kindOf(field: unknown): string {
     case 'literal':
       return (d.values ?? []).map((v) => `\`${String(v)}\``).join(' or ');
     case 'union':
-      return (d.options ?? []).map(kindOf).join(' or ');
+      return [...new Set((d.options ?? []).map(kindOf))].join(' or ');
     case 'pipe':
       // z.preprocess(f, inner) and z.x().pipe(inner): the user writes what the inner type accepts;
       // for x.transform(f) (out is a transform) the input type is the one to describe
@@ -121,6 +121,41 @@ function table(shape: Record<string, unknown>): string[] {
   return rows;
 }
 
+/**
+ * The table of a section (an object, or the items of a list of objects) under a heading, then
+ * the same for each of its fields that is itself a section or a list of sections, one heading
+ * level deeper (e.g. `ratings.switch`, `yoke.members`).
+ */
+function sectionDoc(path: string, field: unknown, level: number, out: string[]): void {
+  const d = def(field);
+  let shape: Record<string, unknown> | undefined;
+  let title = `\`${path}\``;
+  if (d?.type === 'object' && d.shape) shape = d.shape;
+  else if (d?.type === 'array') {
+    const el = def(d.element);
+    if (el?.type === 'object' && el.shape) {
+      shape = el.shape;
+      title += ' (list; each item)';
+    }
+  }
+  if (d?.type === 'union') {
+    // one table per form, named by its fixed fields, e.g. `fixture.windings.conductor` (shape: round)
+    for (const o of d.options ?? []) {
+      const od = def(o);
+      if (od?.type !== 'object' || !od.shape) continue;
+      const fixed = Object.entries(od.shape)
+        .map(([k, f]) => [k, def(f)] as const)
+        .filter(([, fd]) => fd?.type === 'literal' || (fd?.type === 'enum' && Object.keys(fd.entries ?? {}).length === 1))
+        .map(([k, fd]) => `${k}: ${String(fd!.type === 'literal' ? fd!.values?.[0] : Object.values(fd!.entries ?? {})[0])}`);
+      out.push(`${'#'.repeat(level)} \`${path}\`${fixed.length ? ` (${fixed.join(', ')})` : ''}`, '', descriptionOf(o) || descriptionOf(field), '', ...table(od.shape), '');
+    }
+    return;
+  }
+  if (!shape) return;
+  out.push(`${'#'.repeat(level)} ${title}`, '', descriptionOf(field) || descriptionOf(unwrapSchema(field)), '', ...table(shape), '');
+  for (const [key, sub] of Object.entries(shape)) sectionDoc(`${path}.${key}`, sub, Math.min(level + 1, 4), out);
+}
+
 /** The Markdown reference of the design file. */
 export function designFileMarkdown(): string {
   const out: string[] = [
@@ -144,14 +179,7 @@ export function designFileMarkdown(): string {
   for (const [key, field] of Object.entries(DESIGN_SECTIONS)) {
     const d = def(field);
     top.push(`| \`${key}\` | ${esc(kindOf(field))} | ${esc(showDefault(field))} | ${esc(d?.type === 'object' || d?.type === 'array' ? descriptionOf(field) || descriptionOf(unwrapSchema(field)) : fieldDescription(field))} |`);
-    if (d?.type === 'object' && d.shape) {
-      sections.push(`## \`${key}\``, '', descriptionOf(field) || descriptionOf(unwrapSchema(field)), '', ...table(d.shape), '');
-    } else if (d?.type === 'array') {
-      const el = def(d.element);
-      if (el?.type === 'object' && el.shape) {
-        sections.push(`## \`${key}\` (list; each item)`, '', descriptionOf(field), '', ...table(el.shape), '');
-      }
-    }
+    sectionDoc(key, field, 2, sections);
   }
   return [...out, ...top, '', ...sections].join('\n').replace(/\n+$/, '\n');
 }

@@ -3,7 +3,8 @@ import { designFieldInfo } from './designField.js';
 
 describe('designFieldInfo(segments)', () => {
   it('gives the dimension of quantity fields from the design schema', () => {
-    expect(designFieldInfo(['bank', 'capacitance'])).toEqual({ known: true, quantity: true, dimension: 'capacitance' });
+    expect(designFieldInfo(['bank', 'capacitance'])).toEqual({ known: true, quantity: true, dimension: 'capacitance', integer: false });
+    expect(designFieldInfo(['ratings', 'capacitor', 'units'])).toMatchObject({ dimension: 'dimensionless', integer: true });
     expect(designFieldInfo(['coil', 'initialTemperature'])).toMatchObject({ dimension: 'temperature' });
     expect(designFieldInfo(['coupled', 3, 'resistance'])).toMatchObject({ dimension: 'resistance' });
     expect(designFieldInfo(['coupled', 0, 'mutualTo', 'shell-2'])).toMatchObject({ dimension: 'inductance' });

@@ -9,7 +9,7 @@ import { quantityInfo, unwrapSchema } from '../design/quantity-schema.js';
 import type { Dimension } from '../units/quantity.js';
 import type { PathSegment } from './designPath.js';
 
-export type DesignFieldInfo = { known: false } | { known: true; quantity: false } | { known: true; quantity: true; dimension: Dimension };
+export type DesignFieldInfo = { known: false } | { known: true; quantity: false } | { known: true; quantity: true; dimension: Dimension; integer: boolean };
 
 interface ZodNode {
   _zod?: { def: { type: string; shape?: Record<string, unknown>; element?: unknown; valueType?: unknown; options?: unknown[]; in?: unknown } };
@@ -45,7 +45,7 @@ export function designFieldInfo(segments: readonly PathSegment[], schema: unknow
   }
   for (const n of nodes) {
     const q = quantityInfo(n);
-    if (q) return { known: true, quantity: true, dimension: q.dimension };
+    if (q) return { known: true, quantity: true, dimension: q.dimension, integer: q.range.integer === true };
   }
   return { known: true, quantity: false };
 }

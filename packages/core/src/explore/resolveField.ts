@@ -12,6 +12,8 @@ import { designFieldInfo, type DesignFieldInfo } from './designField.js';
 export interface ResolvedField {
   path: DesignPath;
   dimension: Dimension;
+  /** A whole-number field (turns, layers, units): values are rounded to integers. */
+  integer: boolean;
   /** The design's value (SI, °C for temperatures); undefined when the optional field is not set. */
   current: number | undefined;
 }
@@ -28,5 +30,5 @@ export function resolveField(
   if (!info.known) throw fail(`${path.text} is in the design file but not a field of the design schema`);
   if (!info.quantity) throw fail(`${path.text} is not a numeric field (it holds ${JSON.stringify(value)})`);
   if (value !== undefined && typeof value !== 'number') throw fail(`${path.text} holds ${JSON.stringify(value)}, not a number`);
-  return { path, dimension: info.dimension, current: value };
+  return { path, dimension: info.dimension, integer: info.integer, current: value };
 }

@@ -56,7 +56,8 @@ export async function runTolerance(design: Design, fields: ToleranceField[], opt
   const samples = options.samples ?? DEFAULT_TOLERANCE_SAMPLES;
   const seed = options.seed ?? 1;
   const distribution = options.distribution ?? 'uniform';
-  const draws = drawTolerances(fields, samples, seed, distribution);
+  // Whole-number fields (turns, layers) take the nearest integer of each draw.
+  const draws = drawTolerances(fields, samples, seed, distribution).map((row) => row.map((v, k) => (fields[k]!.integer ? Math.round(v) : v)));
   const run = await runPoints(
     design,
     fields.map((f) => f.path),

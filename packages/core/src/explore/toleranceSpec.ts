@@ -21,6 +21,8 @@ export interface ToleranceSpec {
 export interface ToleranceField {
   path: DesignPath;
   dimension: Dimension;
+  /** A whole-number field: drawn values are rounded to integers. */
+  integer: boolean;
   nominal: number;
   fraction: number;
   spec: string;
@@ -62,8 +64,8 @@ export function parseToleranceSpec(text: string): ToleranceSpec {
 /** Resolve a tolerance against a parsed design: the path must be a numeric field that is set. */
 export function resolveTolerance(spec: ToleranceSpec, design: unknown, fieldInfo?: (segments: readonly (string | number)[]) => DesignFieldInfo): ToleranceField {
   const source: OptionSource = { option: '--tolerance', value: spec.text, expected: TOLERANCE_EXPECTED };
-  const { path, current, dimension } = resolveField(design, spec.pathText, source, fieldInfo);
+  const { path, current, dimension, integer } = resolveField(design, spec.pathText, source, fieldInfo);
   if (current === undefined) throw tolError(spec.text, `${path.text} is not set in the design, so it has no nominal value`);
   if (current === 0) throw tolError(spec.text, `${path.text} is 0 in the design, so a relative tolerance has no effect`);
-  return { path, dimension, nominal: current, fraction: spec.fraction, spec: spec.text };
+  return { path, dimension, integer, nominal: current, fraction: spec.fraction, spec: spec.text };
 }

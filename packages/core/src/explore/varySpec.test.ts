@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { isInputError, type InputError } from '../design/errors.js';
 import { linearValues, logValues, parseVarySpec, resolveVaryAxis } from './varySpec.js';
 import { fixtureDesign } from './__fixtures__/design.js';
+import { sizingDesign } from './__fixtures__/sizingDesign.js';
 
 const design = fixtureDesign();
 
@@ -61,6 +62,12 @@ describe('resolveVaryAxis(spec, design)', () => {
     expect(resolveVaryAxis(parseVarySpec('bank.esr=1m,2m'), design).values).toEqual([1e-3, 2e-3]);
     expect(resolveVaryAxis(parseVarySpec('coil.initialTemperature=20 degC,313.15 K'), design).values).toEqual([20, 40]);
     expect(resolveVaryAxis(parseVarySpec('coupled[0].resistance=0.1m:0.3m:3'), design).values).toEqual([1e-4, 2e-4, 3e-4]);
+  });
+
+  it('rounds spaced values of a whole-number field and refuses fractions in a list', () => {
+    const d = sizingDesign();
+    expect(resolveVaryAxis(parseVarySpec('ratings.capacitor.units=1:4:7'), d).values).toEqual([1, 2, 3, 4]);
+    expect(inputError(() => resolveVaryAxis(parseVarySpec('ratings.capacitor.units=1,1.5'), d)).message).toMatch(/whole numbers/);
   });
 
   it('accepts an optional field the schema knows but the design leaves unset', () => {

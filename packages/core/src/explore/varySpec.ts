@@ -11,7 +11,8 @@
  * field's dimension in the design schema.
  *
  * Spacing: linear x_i = a + (b − a)·i/(n − 1); logarithmic x_i = a·(b/a)^(i/(n − 1)),
- * i = 0 … n − 1, with x_0 = a and x_(n−1) = b exactly.
+ * i = 0 … n − 1, with x_0 = a and x_(n−1) = b exactly. Whole-number fields (turns, layers,
+ * units) take the spaced values rounded to integers, repeats dropped.
  */
 import { InputError } from '../design/errors.js';
 import type { Dimension } from '../units/quantity.js';
@@ -113,7 +114,7 @@ function clean(x: number): number {
  */
 export function resolveVaryAxis(spec: VarySpec, design: unknown, fieldInfo?: (segments: readonly (string | number)[]) => DesignFieldInfo): SweepAxis {
   const source: OptionSource = { option: '--vary', value: spec.text, expected: VARY_EXPECTED };
-  const { path, dimension } = resolveField(design, spec.pathText, source, fieldInfo);
+  const { path, dimension, integer } = resolveField(design, spec.pathText, source, fieldInfo);
   const parsed = spec.tokens.map((token) => {
     const r = parseAxisValue(token, dimension);
     if (!r.ok) {
@@ -129,7 +130,11 @@ export function resolveVaryAxis(spec: VarySpec, design: unknown, fieldInfo?: (se
     return r.value;
   });
   let values: number[];
-  if (spec.spacing === 'list') values = parsed;
+  if (spec.spacing === 'list') {
+    const fraction = integer ? parsed.find((v) => !Number.isInteger(v)) : undefined;
+    if (fraction !== undefined) throw varyError(spec.text, `${path.text} takes whole numbers, got ${fraction}`);
+    values = parsed;
+  }
   else {
     const [a, b] = parsed as [number, number];
     const count = spec.count ?? 2;
@@ -139,5 +144,7 @@ export function resolveVaryAxis(spec: VarySpec, design: unknown, fieldInfo?: (se
       values = logValues(a, b, count);
     } else values = linearValues(a, b, count);
   }
+  // A whole-number field (turns, layers): round the spaced values and drop repeats.
+  if (integer) values = [...new Set(values.map((v) => Math.round(v)))];
   return { path, spacing: spec.spacing, values, dimension, spec: spec.text };
 }

@@ -162,12 +162,10 @@ describe.skipIf(!ng.path)('simulateShot vs ngspice (independent circuit simulato
         expect(waveformDeviation(r, spice.coil, 0.04, spicePeak.peak)).toBeLessThan(2e-4);
       });
 
-      // KNOWN DISCREPANCY (reported to the engine's author): in the last half-wave, near 52 ms with the capacitor at
-      // 1.4 V, ngspice's forward device stops at current zero and the capacitor is left at 0.14 V (below V_T0, so no
-      // device can conduct again), whereas simulateShot keeps a 'discharge' phase whose current goes negative
-      // (−2 A at 54 ms) until 57.7 ms. `test.fails` keeps this visible: when the engine is fixed this test starts
-      // to pass, vitest reports it, and it must become a plain `test`.
-      test.fails(`solver ${method}: the ring's tail (currents below 1 % of the peak) ends as in ngspice`, () => {
+      // The ring's tail: near 52 ms with the capacitor at 1.4 V, the last forward half-wave stops at current zero and
+      // leaves the capacitor at about 0.14 V, below V_T0, so no device can conduct again. (An earlier engine kept
+      // conducting there with a negative current; this check caught it.)
+      test(`solver ${method}: the ring's tail (currents below 1 % of the peak) ends as in ngspice`, () => {
         const r = simulateShot({ ...station, solver: { ...station.solver, method } });
         // The whole shot: 2e-4 of the peak; final capacitor voltage within 0.05 V (the ring stops within one
         // device threshold of zero; both tools see the same thresholds).

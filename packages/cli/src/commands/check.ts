@@ -1,6 +1,6 @@
 /** `fluxkick check <design>`: validate a design file and print what was understood, with units. */
 import type { Command } from 'commander';
-import { describeDesign, describeOrientation, designToStation, loadDesign, safetyNotice } from '@fluxkick/core';
+import { describeDesign, describeFixture, describeOrientation, designToStation, loadDesign, safetyNotice } from '@fluxkick/core';
 import type { CliContext } from '../context.js';
 import { renderSections } from '../render.js';
 
@@ -19,7 +19,7 @@ export function registerCheck(program: Command, ctx: CliContext): Command {
         ctx.io.stdout(`${JSON.stringify(station, null, 2)}\n`);
         return;
       }
-      const sections = [...describeDesign(design), describeOrientation(station)];
+      const sections = [...describeDesign(design), ...describeFixture(design), describeOrientation(station)];
       ctx.io.stdout(`${designPath}: OK, understood as:\n\n${renderSections(sections)}\n${safetyNotice(station, 'text')}\n`);
     });
 }

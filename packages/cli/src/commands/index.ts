@@ -12,6 +12,7 @@ import { registerSchema } from './schema.js';
 import { registerHold } from './hold.js';
 import { registerSweep } from './sweep.js';
 import { registerSize } from './size.js';
+import { registerCoil } from './coil.js';
 
 export type RegisterCommand = (program: Command, ctx: CliContext) => Command;
 
@@ -23,4 +24,5 @@ export const COMMANDS: RegisterCommand[] = [
   registerHold,
   registerSweep,
   registerSize,
+  registerCoil,
 ];

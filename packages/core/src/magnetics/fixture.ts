@@ -133,6 +133,12 @@ export interface FixtureBuild {
   network: ShellNetwork;
 }
 
+/** A length in millimetres for notes, with a true minus sign. */
+function mm(x_m: number): string {
+  const v = (x_m * 1e3).toFixed(2);
+  return `${v.replace('-', '−')} mm`;
+}
+
 function rectOverlap(a: Rect, b: Rect): boolean {
   const tol = 1e-12;
   return Math.min(a.x2, b.x2) - Math.max(a.x1, b.x1) > tol && Math.min(a.y2, b.y2) - Math.max(a.y1, b.y1) > tol;
@@ -296,7 +302,7 @@ export function buildFixture(spec: FixtureGeometrySpec): FixtureBuild {
   const probes: FieldProbe[] = points.map((p) => ({ name: p.name, coil_ApmPerA: layersField(layers, p.r_m, p.z_m).hz, loops_ApmPerA: loopFieldsAt(network, p.r_m, p.z_m) }));
   if (partField && partField.min_ApmPerA < 0.9 * probes[0].coil_ApmPerA) {
     notes.push(
-      `The coil's field is uneven over the part: its weakest point (r = ${(partField.minAt.r_m * 1e3).toFixed(2)} mm, z = ${(partField.minAt.z_m * 1e3).toFixed(2)} mm) sees ${((100 * partField.min_ApmPerA) / probes[0].coil_ApmPerA).toFixed(0)} % of the field at the part's centre; see the probe "part weakest point".`,
+      `The coil's field is uneven over the part: its weakest point (r = ${mm(partField.minAt.r_m)}, z = ${mm(partField.minAt.z_m)}) sees ${((100 * partField.min_ApmPerA) / probes[0].coil_ApmPerA).toFixed(0)} % of the field at the part's centre; see the probe "part weakest point".`,
     );
   }
 
@@ -364,7 +370,7 @@ export function buildFixture(spec: FixtureGeometrySpec): FixtureBuild {
     estimates.push({
       winding: w.name,
       quantity: 'centreField_ApmPerA',
-      formula: 'thick solenoid, uniform current density (centre on the axis)',
+      formula: 'Montgomery thick solenoid (centre field)',
       source: 'Montgomery, Solenoid Magnet Design, 1969',
       value: thickSolenoidCentreField_ApmPerA(w.innerRadius_m, w.outerRadius_m, w.length_m, w.turns),
       ours: layersField(w.layerList, 0, w.centre_m).hz,

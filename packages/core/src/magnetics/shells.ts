@@ -45,7 +45,7 @@ export interface BodySpec {
   /** Axial position of the body's centre, m. Default 0. */
   centre_m?: number;
   material: BodyMaterial;
-  /** Number of radial shells. Default DEFAULT_RADIAL_SHELLS. */
+  /** Number of radial shells. Default: defaultRadialShells (10 for a solid body, fewer for a thin tube). */
   radialShells?: number;
   /** Number of equal axial slices. Default: length/outer radius, rounded, from 1 to 8. */
   axialSlices?: number;
@@ -55,6 +55,12 @@ export interface BodySpec {
 
 export const DEFAULT_RADIAL_SHELLS = 10;
 export const DEFAULT_GRADING = 1;
+
+/** Default radial shells: DEFAULT_RADIAL_SHELLS for a solid body; for a tube, 10 × wall/outer radius, from 2 to 10. */
+export function defaultRadialShells(innerRadius_m: number, outerRadius_m: number): number {
+  if (innerRadius_m === 0) return DEFAULT_RADIAL_SHELLS;
+  return Math.min(DEFAULT_RADIAL_SHELLS, Math.max(2, Math.round((10 * (outerRadius_m - innerRadius_m)) / outerRadius_m)));
+}
 
 export function defaultAxialSlices(length_m: number, outerRadius_m: number): number {
   return Math.min(8, Math.max(1, Math.round(length_m / outerRadius_m)));
@@ -102,7 +108,7 @@ export function meshBody(spec: BodySpec): BodyMesh {
   if (!(ri >= 0)) fail('innerRadius', ri, 'an inner radius of 0 (solid) or more', 'negative');
   if (!(ro > ri)) fail('outerRadius', ro, `an outer radius greater than the inner radius (${ri} m)`, 'not greater');
   if (!(len > 0)) fail('length', len, 'a length greater than 0', 'not positive');
-  const nr = spec.radialShells ?? DEFAULT_RADIAL_SHELLS;
+  const nr = spec.radialShells ?? defaultRadialShells(ri, ro);
   if (!(Number.isInteger(nr) && nr >= 1 && nr <= 64)) fail('radialShells', nr, 'a whole number from 1 to 64', 'out of range');
   const nz = spec.axialSlices ?? defaultAxialSlices(len, ro);
   if (!(Number.isInteger(nz) && nz >= 1 && nz <= 64)) fail('axialSlices', nz, 'a whole number from 1 to 64', 'out of range');

@@ -40,7 +40,7 @@ describe('parseCoilSpec(text, fileName)', () => {
   });
 
   it('reads the example spec, and a whole design file with a fixture section gives the same coil', () => {
-    const r = loadCoilSpec(`${ROOT}examples/coil-g7.yaml`);
+    const r = loadCoilSpec(`${ROOT}examples/coils/g7.yaml`);
     expect(r.name).toBe('Orbell Servo G-7 coil');
     const d = loadCoilSpec(`${ROOT}examples/geometry-station.yaml`);
     expect(d.name).toBe('Orbell Servo, line 2, rotor fixture G-7');

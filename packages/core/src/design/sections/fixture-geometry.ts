@@ -96,7 +96,7 @@ const materialFields = {
 };
 
 const meshFields = {
-  radialShells: count({ min: 1, max: 64, description: 'Radial shells of the eddy model (default 10; equal shells)' }).optional(),
+  radialShells: count({ min: 1, max: 64, description: 'Radial shells of the eddy model (default 10 for a solid body, 10 × wall/outer radius for a tube, at least 2; equal shells)' }).optional(),
   axialSlices: count({ min: 1, max: 64, description: 'Axial slices (default: length/outer radius, from 1 to 8)' }).optional(),
   grading: num({ min: 1, max: 3, description: 'Thickness ratio of neighbouring shells, inner/outer (default 1: equal)' }).optional(),
 };
@@ -362,7 +362,7 @@ export function describeFixture(design: Design, digits = 4): DescribedSection[] 
     out.push({
       title: `fixture body ${b.name} (derived)`,
       rows: [
-        { path: `fixture.bodies.${b.name}.material`, label: 'material', text: `${b.material}, ${formatQuantity(b.resistivity20_Ohm_m, 'Ω·m', { digits: 3 })}` },
+        { path: `fixture.bodies.${b.name}.material`, label: 'material', text: `${b.material}, ${formatNumber(b.resistivity20_Ohm_m * 1e6, 3)} µΩ·m` },
         { path: `fixture.bodies.${b.name}.loops`, label: 'loops (shells × slices)', text: `${b.loopCount} (${b.radialShells} × ${b.axialSlices})` },
         { path: `fixture.bodies.${b.name}.heatCapacity`, label: 'heat capacity', text: q(b.heatCapacity_JpK, 'J/K') },
         { path: `fixture.bodies.${b.name}.diffusionTime`, label: `diffusion time, ${b.diffusionTimeBasis}`, text: q(b.diffusionTime_s, 's') },

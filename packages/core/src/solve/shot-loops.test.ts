@@ -19,10 +19,11 @@ describe('simulateShot: coil coupled to shorted loops', () => {
     initialTemperature_C: 20,
   });
 
-  it('a resistance-free loop reduces the coil inductance to L1·(1 − k²): series RLC closed form with that inductance (Nilsson & Riedel, coupled coils and natural response)', () => {
+  for (const method of ['odex', 'stiff'] as const)
+  it(`${method} integrator: a resistance-free loop reduces the coil inductance to L1·(1 − k²): series RLC closed form with that inductance (Nilsson & Riedel, coupled coils and natural response)`, () => {
     // A shorted loop without resistance keeps its flux linkage at zero: L2·i2 + M·i1 = 0, so the
     // coil sees L1 − M²/L2 = L1·(1 − k²). Tolerance 1e-6 as for the series RLC checks.
-    const st = makeStation({ coupled: [loop(0)], solver: { samples: 201 } });
+    const st = makeStation({ coupled: [loop(0)], solver: { samples: 201, method } });
     const r = simulateChecked(st);
     const cf = seriesRlcClosedForm({ C_F: 2e-3, L_H: L1 * (1 - k * k), R_Ohm: 0.05, V0_V: 1000 });
     expect(rel(r.figures.peakCurrent_A, cf.peakCurrent_A)).toBeLessThan(1e-6);
@@ -65,6 +66,22 @@ describe('simulateShot: coil coupled to shorted loops', () => {
     const maxSample = Math.max(...w.field_Apm[0].map(Math.abs));
     expect(r.figures.peakField_Apm).toBeGreaterThanOrEqual(maxSample * (1 - 1e-12));
     expect(r.probes[1].peakField_Apm).toBeGreaterThanOrEqual(Math.max(...w.field_Apm[1].map(Math.abs)) * (1 - 1e-12));
+  });
+
+  it('a stiff loop (τ = L2/R2 = 1 µs against a 1 ms pulse): stiff and odex integrators agree to 1e-6, auto picks stiff', () => {
+    const fast = { ...loop(1e-6 / 1e-6), inductance_H: 1e-6, resistance20_Ohm: 1 }; // τ = 1 µs
+    const base = makeStation({ coupled: [fast], diode: { position: 'fixture', thresholdVoltage_V: 0.9, slopeResistance_Ohm: 3e-4 }, esl: 0.2e-6, cableL: 1e-6, solver: { samples: 0 } });
+    const a = simulateChecked({ ...base, solver: { ...base.solver, method: 'odex' } });
+    const b = simulateChecked({ ...base, solver: { ...base.solver, method: 'stiff' } });
+    const c = simulateChecked(base);
+    expect(b.solver.method).toBe('stiff');
+    expect(c.solver.method).toBe('stiff');
+    expect(rel(b.figures.peakCurrent_A, a.figures.peakCurrent_A)).toBeLessThan(1e-6);
+    expect(rel(b.figures.i2tDiode_A2s, a.figures.i2tDiode_A2s)).toBeLessThan(1e-6);
+    expect(rel(b.loops[0].peakCurrent_A, a.loops[0].peakCurrent_A)).toBeLessThan(1e-6);
+    expect(rel(b.figures.pulseWidthHalfMax_s, a.figures.pulseWidthHalfMax_s)).toBeLessThan(1e-6);
+    // the explicit integrator is held to steps of a few µs by the loop; the stiff one is not
+    expect(b.solver.steps).toBeLessThan(a.solver.steps / 5);
   });
 
   it('three mutually coupled loops with a freewheel diode: energy balance and loops decaying after the pulse', () => {

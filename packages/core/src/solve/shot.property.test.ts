@@ -57,6 +57,7 @@ const stationArb = fc
     alpha: fc.constantFrom(0, 0.00393),
     loops: fc.array(loopArb, { minLength: 0, maxLength: 3 }),
     kLoops: fc.double({ min: 0, max: 0.2, noNaN: true }),
+    method: fc.constantFrom('auto' as const, 'odex' as const, 'stiff' as const),
   })
   .map((p) => {
     const coupled = p.loops.map((l, q) => ({
@@ -85,7 +86,7 @@ const stationArb = fc
       coupled,
       loopMutual,
       probes: [{ name: 'part', coil_ApmPerA: 80, loops_ApmPerA: p.loops.map((l) => l.h) }],
-      solver: { samples: 40, tMax_s: 0.2 },
+      solver: { samples: 40, tMax_s: 0.2, method: p.method },
     });
     return st;
   })
@@ -99,7 +100,7 @@ const stationArb = fc
   });
 
 describe('simulateShot: properties over random valid stations (fast-check, 30 runs each)', () => {
-  it('energy balance ≤ 1e-6 and finite figures and waveform (conservation of energy; any diode position, switch kind, 0–3 loops)', () => {
+  it('energy balance ≤ 1e-6 and finite figures and waveform (conservation of energy; any diode position, switch kind, 0–3 loops, each integrator)', () => {
     fc.assert(
       fc.property(stationArb, (st) => {
         simulateChecked(st);

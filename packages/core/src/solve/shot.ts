@@ -46,7 +46,8 @@ import type { PhaseRecord, ShotResult, Waveform, Warning } from '../model/result
 import { DEFAULT_SOLVER, type Station } from '../model/station.js';
 import { brentZero } from './brent.js';
 import { ExtremumTracker, type DenseProbe, type Quantity } from './extrema.js';
-import type { IntegrateOptions, Integrator, StepView } from './integrator.js';
+import type { Integrator, StepView } from './integrator.js';
+import type { StiffOptions } from './stiff-integrator.js';
 import { chooseIntegrator, releaseIntegrator } from './choose-integrator.js';
 import { stateScales } from './scales.js';
 import { CurveLog } from './curve-log.js';
@@ -71,7 +72,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const integrator = options.integrator ?? chooseIntegrator(settings.method, rhs, scales);
   const absTol = new Float64Array(N);
   for (let i = 0; i < N; i++) absTol[i] = settings.absTol * scales.state[i];
-  const intOpts: IntegrateOptions = {
+  const intOpts: StiffOptions = {
     relTol: settings.relTol,
     absTol,
     maxSteps: settings.maxSteps,
@@ -79,6 +80,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     // dense output built at every step (and error-controlled) for the coil and loop currents;
     // the other components only when an event or a peak is bracketed
     denseEager: [IL, ...net.loops.map((_, k) => loopCurrentIndex(k))],
+    // the stiff integrator solves the electrical states implicitly, the rest explicitly
+    implicit: [V, IS, IL, ...net.loops.map((_, k) => loopCurrentIndex(k))],
   };
   const eventTol = settings.eventTol_s;
   const tMax = settings.tMax_s;

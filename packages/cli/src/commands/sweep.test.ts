@@ -39,6 +39,15 @@ describe('fluxkick sweep', () => {
     expect(r.err).toBe(''); // no progress bar when standard error is not a terminal
   });
 
+  it('shows a progress bar on standard error when it is a terminal, and none with --no-progress', async () => {
+    const tty = captureIo({ cwd: dir, stderrIsTTY: true });
+    expect(await main(['sweep', 'bench.yaml', '--vary', 'bank.voltage=0.8k:1.2k:6'], tty)).toBe(0);
+    expect(tty.err).toMatch(/sweep \[.*\] \d+\/6 points/);
+    const quiet = captureIo({ cwd: dir, stderrIsTTY: true });
+    expect(await main(['sweep', 'bench.yaml', '--vary', 'bank.voltage=0.8k:1.2k:6', '--no-progress'], quiet)).toBe(0);
+    expect(quiet.err).toBe('');
+  });
+
   it('writes CSV to standard output with "-", JSON with --json, and an SVG map with --svg', async () => {
     const csv = await run(['sweep', 'bench.yaml', '--vary', 'bank.voltage=1k,1.5k', '--csv', '-']);
     expect(csv.code).toBe(0);

@@ -4,7 +4,8 @@
  *       target >= 5,000 shots/s;
  *   (b) the same station with eight coupled eddy-current loops (a conductive part cut into eight shells,
  *       tests/reference/ngspice-circuits.ts), target >= 200 shots/s;
- * for each integrator (Station.solver.method 'odex' and 'stiff'; the note says which one actually ran), and the
+ * for each integrator (Station.solver.method 'odex', 'stiff', and 'auto', the default, which picks one by the
+ * stiffness of the loop network; the note says which one actually ran), and the
  * accuracy of the linear case: the demo with zero device thresholds, no freewheel diode and constant coil
  * resistance is a series RLC whose thyristor stops at the first current zero, so the closed
  * form (Nilsson & Riedel, natural response of the series RLC circuit) is exact: relative error of the peak
@@ -16,7 +17,7 @@ import { eddyShellLoops, seriesRlc } from '../tests/reference/ngspice-circuits.j
 import { defineBench, timeIt, type BenchRow } from './harness.js';
 
 const DEMO = fileURLToPath(new URL('../examples/demo-station.yaml', import.meta.url));
-const METHODS = ['odex', 'stiff'] as const;
+const METHODS = ['odex', 'stiff', 'auto'] as const;
 
 export function demoStation(): Station {
   const st = designToStation(loadDesign(DEMO));

@@ -77,3 +77,4 @@ export type { PenetrationFigures, BodyPenetration, PenetrationOptions } from './
 export { runSweep, sizeBank, sizingTarget, runTolerance, solveVoltage, parseVarySpec, resolveVaryAxis, parseToleranceSpec, resolveTolerance, unitBuild, findRoot } from './explore/public.js';
 export { sweepToCsv, sweepToJson, sweepToText, sweepMapInput, sizeToText, sizeToJson, toleranceToText, toleranceToJson, toleranceToCsv, toleranceHistogramInput, toleranceReportHtml } from './explore/public.js';
 export type { SweepAxis, SweepResult, SweepRow, RunOptions, SizeBankOptions, SizeResult, BankCandidate, CapacitorUnit, ToleranceOptions, ToleranceResult, ToleranceField, VoltageSolve, PointOutcome } from './explore/public.js';
+export { adiabaticFinalTemperature, adiabaticI2t } from './analysis/heating-iec60949.js';

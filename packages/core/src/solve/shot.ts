@@ -58,6 +58,27 @@ export interface SimulateOptions {
   integrator?: Integrator;
 }
 
+/**
+ * Work arrays of one shot, kept between shots of the same state size (a sweep runs thousands of
+ * shots; allocating them anew each time costs more than some of the integration). A free list, so
+ * a shot started while another is running (from a callback) gets its own.
+ */
+interface Workspace {
+  n: number;
+  a: Float64Array[];
+  curve: CurveLog;
+}
+const freeWorkspaces: Workspace[] = [];
+function acquireWorkspace(n: number): Workspace {
+  const i = freeWorkspaces.findIndex((w) => w.n === n);
+  if (i >= 0) return freeWorkspaces.splice(i, 1)[0];
+  return { n, a: Array.from({ length: 11 }, () => new Float64Array(n)), curve: new CurveLog() };
+}
+function releaseWorkspace(w: Workspace): void {
+  if (freeWorkspaces.length >= 8) freeWorkspaces.shift();
+  freeWorkspaces.push(w);
+}
+
 type EndReason = 'current-zero' | 'decayed' | 't-max' | 'step-limit' | 'step-too-small' | 'chattering';
 
 export function simulateShot(station: Station, options: SimulateOptions = {}): ShotResult {
@@ -70,7 +91,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const scales = stateScales(rhs);
   rhs.instantCommutation_s = 1e-6 * scales.time_s;
   const integrator = options.integrator ?? chooseIntegrator(settings.method, rhs, scales);
-  const absTol = new Float64Array(N);
+  const ws = acquireWorkspace(N);
+  const absTol = ws.a[0];
   for (let i = 0; i < N; i++) absTol[i] = settings.absTol * scales.state[i];
   const intOpts: StiffOptions = {
     relTol: settings.relTol,
@@ -88,15 +110,16 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const E0 = net.storedEnergy_J;
   const warnings: Warning[] = [];
 
-  const y = new Float64Array(N);
-  const dy = new Float64Array(N);
+  const y = ws.a[1];
+  const dy = ws.a[2];
+  y.fill(0);
   y[V] = net.voltage_V;
 
   // ---- dense-output probe shared by events and trackers ------------------------------------
   let view: StepView | null = null;
   const probe: DenseProbe = {
-    y: new Float64Array(N),
-    dy: new Float64Array(N),
+    y: ws.a[3],
+    dy: ws.a[4],
     at(t: number) {
       view!.dense(t, this.y);
       rhs.eval(t, this.y, this.dy);
@@ -124,8 +147,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     };
   };
   // d²i_s/dt² by a directional difference of f along f (exact for the linear part of f)
-  const jvY = new Float64Array(N);
-  const jvDy = new Float64Array(N);
+  const jvY = ws.a[5];
+  const jvDy = ws.a[6];
   const hJv = 1e-6 * scales.time_s;
   const switchDidt: Quantity = {
     value: (_yy, d) => d[IS],
@@ -168,7 +191,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   // the step log is only needed to sample the waveform afterwards
   const keepLog = settings.samples > 0;
   const log = new StepLog(N, keepLog ? 64 : 1);
-  const coilCurve = new CurveLog();
+  const coilCurve = ws.curve;
+  coilCurve.count = 0;
   const phases: PhaseRecord[] = [];
   const phaseModes: Mode[] = [];
   let mode: Mode = { sw: 1, diode: false };
@@ -186,15 +210,15 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   let gPrev = new Float64Array(8);
   let phaseIndex = 0;
   let prevT = 0;
-  const prevY = new Float64Array(N);
+  const prevY = ws.a[7];
   let hitIndex = -1;
   let hitT = 0;
   let hitStepT0 = 0;
   let firstStep = true;
   let zeroLength = 0;
-  const hitY = new Float64Array(N);
-  const hitDy = new Float64Array(N);
-  const lastY = new Float64Array(N);
+  const hitY = ws.a[8];
+  const hitDy = ws.a[9];
+  const lastY = ws.a[10];
   let lastT = 0;
   const gBuf = new Float64Array(8);
 
@@ -516,6 +540,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   }
 
   if (!options.integrator) releaseIntegrator(integrator);
+  releaseWorkspace(ws);
 
   return {
     figures,

@@ -93,15 +93,12 @@ export async function withRunControls<T>(
   run: (signal: AbortSignal, onProgress: (done: number, total: number) => void) => Promise<T>,
 ): Promise<{ value: T; interrupted: boolean }> {
   const controller = new AbortController();
-  let interrupts = 0;
+  // First Ctrl-C: stop cleanly. The listener then steps aside, so a second Ctrl-C gets Node's
+  // default handling (the process ends at once) without this code calling process.exit.
   const onSigint = () => {
-    interrupts += 1;
-    if (interrupts === 1) {
-      ctx.io.stderr('\nfluxkick: stopping after the shots in progress (Ctrl-C again to quit at once)...\n');
-      controller.abort();
-    } else {
-      process.exit(EXIT_INTERRUPTED);
-    }
+    process.removeListener('SIGINT', onSigint);
+    ctx.io.stderr('\nfluxkick: stopping after the shots in progress (Ctrl-C again to quit at once)...\n');
+    controller.abort();
   };
   process.on('SIGINT', onSigint);
   let bar: cliProgress.SingleBar | undefined;

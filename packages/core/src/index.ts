@@ -72,7 +72,7 @@ export { steadyState, maxShotsPerMinute, thermalTimeConstant } from './analysis/
 export { magneticPressure_Pa, windingHoopStress_Pa } from './analysis/forces.js';
 export { allowedSurgeCurrent_A, halfSineI2t_A2s, equivalentHalfSineDuration_s } from './analysis/ratings.js';
 export { bleederTime_s } from './analysis/bleeder.js';
-export { penetrationFigures, skinDepth_m, PENETRATION_WARN } from './analysis/penetration.js';
+export { penetrationFigures, penetrationText, skinDepth_m, PENETRATION_WARN } from './analysis/penetration.js';
 export type { PenetrationFigures, BodyPenetration, PenetrationOptions } from './analysis/penetration.js';
 export { runSweep, sizeBank, sizingTarget, runTolerance, solveVoltage, parseVarySpec, resolveVaryAxis, parseToleranceSpec, resolveTolerance, unitBuild, findRoot } from './explore/public.js';
 export { sweepToCsv, sweepToJson, sweepToText, sweepMapInput, sizeToText, sizeToJson, toleranceToText, toleranceToJson, toleranceToCsv, toleranceHistogramInput, toleranceReportHtml } from './explore/public.js';

@@ -8,6 +8,7 @@ import type { Command } from 'commander';
 import {
   formatShotText,
   loadDesign,
+  penetrationText,
   pulsePlotSvg,
   shotReportHtml,
   shotReportMarkdownFiles,
@@ -40,7 +41,7 @@ export function isEngineeringFail(verdict: Verdict | null, result: ShotResult): 
 export function runShot(ctx: CliContext, designPath: string, opts: ShotOptions, shownName = designPath): void {
   const path = ctx.resolvePath(designPath);
   // station, shot with the station's own warnings (a yoke table's range), verdict: one library call
-  const { station, result, verdict } = simulateDesign(loadDesign(path), shownName);
+  const { station, result, verdict, penetration } = simulateDesign(loadDesign(path), shownName);
 
   if (opts.csv !== undefined) {
     writeOutputFile(ctx.resolvePath(opts.csv), waveformToCsv(result), { inputs: [path], field: '--csv' });
@@ -50,6 +51,7 @@ export function runShot(ctx: CliContext, designPath: string, opts: ShotOptions, 
     ctx.io.stdout(`${shotToJsonString(result, verdict, { waveform: Boolean(opts.waveform) })}\n`);
   } else {
     ctx.io.stdout(`${formatShotText({ station, result, verdict, designName: station.name, color: ctx.useColor(opts.color) })}\n`);
+    if (penetration) ctx.io.stdout(`\n${penetrationText(penetration)}\n`);
     if (opts.csv !== undefined) ctx.io.stdout(`waveform written to ${opts.csv}\n`);
     for (const w of written) ctx.io.stdout(`${w} written\n`);
   }

@@ -8,6 +8,10 @@
  * missed its tolerance or been exceeded by the shot's peak current; yokeCoilWarnings says so,
  * and `withStationWarnings` appends those warnings to the shot's (codes already present are
  * not repeated). Call it after simulateShot when you build stations yourself.
+ *
+ * Penetration: with coupled loops, penetrationFigures (analysis/penetration.ts) gives the
+ * equivalent frequency, skin depths, diffusion times and the centre/surface field ratio; its
+ * `part.not-penetrated` warning joins the shot's warnings.
  */
 import type { Design } from '../design/schema.js';
 import { designToStation } from '../design/to-station.js';
@@ -18,6 +22,8 @@ import type { Verdict } from '../model/verdict.js';
 import { simulateShot, type SimulateOptions } from '../solve/shot.js';
 import { judgeInputsFromDesign } from './verdict-design.js';
 import { judgeShot } from './verdict.js';
+import { fixtureBuildOf } from '../design/sections/fixture-geometry.js';
+import { penetrationFigures, type PenetrationFigures } from './penetration.js';
 
 /** The shot with the warnings that come from how its station was built (a yoke coil's table). */
 export function withStationWarnings(station: Station, result: ShotResult): ShotResult {
@@ -33,6 +39,8 @@ export interface DesignShot {
   result: ShotResult;
   /** Verdict from the design's check sections (winding forces are judged even without them). */
   verdict: Verdict;
+  /** Penetration figures (analysis/penetration.ts) when the station has coupled loops; their warning is in `result`. */
+  penetration?: PenetrationFigures;
 }
 
 /**
@@ -41,6 +49,15 @@ export interface DesignShot {
  */
 export function simulateDesign(design: Design, name?: string, options: SimulateOptions = {}): DesignShot {
   const station = designToStation(design, name);
-  const result = withStationWarnings(station, simulateShot(station, options));
-  return { station, result, verdict: judgeShot(station, judgeInputsFromDesign(design), result) };
+  let result = withStationWarnings(station, simulateShot(station, options));
+  // eddy currents: how far the field got into the part (bodies known when the fixture is given by geometry)
+  let penetration: PenetrationFigures | undefined;
+  if (station.coupled.length > 0) {
+    penetration = penetrationFigures(station, fixtureBuildOf(design)?.build.info, result);
+    const extra = penetration.warnings.filter((w) => !result.warnings.some((r) => r.code === w.code));
+    if (extra.length) result = { ...result, warnings: [...result.warnings, ...extra] };
+  }
+  const shot: DesignShot = { station, result, verdict: judgeShot(station, judgeInputsFromDesign(design), result) };
+  if (penetration) shot.penetration = penetration;
+  return shot;
 }

@@ -3,7 +3,11 @@ import { magnetBodyMaterial } from '../magnetics/body-materials.js';
 import { buildFixture } from '../magnetics/fixture.js';
 import { DEFAULT_SOLVER, type Station } from '../model/station.js';
 import { simulateShot } from '../solve/shot.js';
-import { penetrationFigures, skinDepth_m } from './penetration.js';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { parseDesign } from '../design/parse.js';
+import { simulateDesign } from './design-shot.js';
+import { penetrationFigures, penetrationText, skinDepth_m } from './penetration.js';
 
 describe('skinDepth_m(ρ, f)', () => {
   it('copper (ρ20 = 1.7241e-8 Ω·m): 9.35 mm at 50 Hz and 8.53 mm at 60 Hz (REFERENCES.md, printed to 0.01 mm)', () => {
@@ -64,5 +68,20 @@ describe('penetrationFigures(station, fixture, result)', () => {
     expect(p.bodies).toEqual([]);
     expect(p.penetration).toBeNull();
     expect(p.warnings).toEqual([]);
+  });
+});
+
+describe('simulateDesign with a fixture given by geometry', () => {
+  const text = readFileSync(fileURLToPath(new URL('../../../../examples/geometry-station.yaml', import.meta.url)), 'utf8');
+  it('carries the penetration figures; a short pulse adds part.not-penetrated to the shot warnings', () => {
+    const long = simulateDesign(parseDesign(text, 'g.yaml'));
+    expect(long.penetration!.bodies.map((b) => b.name)).toEqual(['part', 'sleeve']);
+    expect(long.result.warnings.some((w) => w.code === 'part.not-penetrated')).toBe(false);
+    expect(penetrationText(long.penetration!)).toContain('equivalent frequency');
+    // a short pulse with no freewheel diode: the thyristor ends it at the first current zero, before the field gets in
+    const shortText = text.replace('capacitance: 3300 uF', 'capacitance: 1 uF').replace(/freewheel:.*\n/, '');
+    const short = simulateDesign(parseDesign(shortText, 'g.yaml'));
+    expect(short.penetration!.penetration!).toBeLessThan(0.95);
+    expect(short.result.warnings.filter((w) => w.code === 'part.not-penetrated')).toHaveLength(1);
   });
 });

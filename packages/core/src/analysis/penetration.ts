@@ -17,6 +17,7 @@
 import type { FixtureInfo } from '../magnetics/fixture.js';
 import type { ShotResult, Warning } from '../model/result.js';
 import type { Station } from '../model/station.js';
+import { formatQuantity } from '../units/format.js';
 
 const MU0 = 4e-7 * Math.PI;
 
@@ -143,4 +144,19 @@ export function penetrationFigures(station: Station, fixture: FixtureInfo | unde
     centreLag_s,
     warnings,
   };
+}
+
+/** Plain-text block of the penetration figures (for the shot summary). */
+export function penetrationText(p: PenetrationFigures): string {
+  const q = (v: number, unit: string) => formatQuantity(v, unit, { digits: 3 });
+  const lines = ['Penetration of the field (eddy currents)', '----------------------------------------'];
+  lines.push(`  rise time to peak current ${q(p.riseTime_s, 's')}; equivalent frequency 1/(4·t_rise) ${q(p.equivalentFrequency_Hz, 'Hz')}`);
+  for (const b of p.bodies) {
+    lines.push(
+      `  ${b.name}: skin depth ${q(b.skinDepth_m, 'm')} against a ${b.solid ? 'radius' : 'wall'} of ${q(b.size_m, 'm')}; diffusion time ${q(b.diffusionTime_s, 's')} (${b.diffusionTimeBasis}), rise/diffusion ${b.riseOverDiffusion.toPrecision(3)}`,
+    );
+  }
+  if (p.centreToSurfaceAtPeak !== null) lines.push(`  field at the part's centre / at its surface, when the surface field peaks: ${(100 * p.centreToSurfaceAtPeak).toFixed(1)} %`);
+  if (p.penetration !== null) lines.push(`  penetration (peak ratio against the coil's own ratio ${p.staticCentreToSurface!.toFixed(3)}): ${(100 * p.penetration).toFixed(1)} %${p.centreLag_s !== null ? `, the centre peaks ${q(p.centreLag_s, 's')} after the surface` : ''}`);
+  return lines.join('\n');
 }

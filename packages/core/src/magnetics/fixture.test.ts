@@ -125,6 +125,9 @@ describe('buildFixture(spec): bad geometry', () => {
   it('a body overlapping the winding', () => {
     expectInputError({ windings: [winding], bodies: [{ name: 'housing', innerRadius_m: 0.02, outerRadius_m: 0.04, length_m: 0.01, material: BODY_METALS.aluminium }] }, 'bodies[0]');
   });
+  it('an insulating part overlapping the winding', () => {
+    expectInputError({ windings: [winding], part: { innerRadius_m: 0, outerRadius_m: 0.02, length_m: 0.01 } }, 'part');
+  });
   it('two bodies with one name', () => {
     const b = { name: 'hub', innerRadius_m: 0.001, outerRadius_m: 0.002, length_m: 0.01, material: BODY_METALS.aluminium };
     expectInputError({ windings: [winding], bodies: [b, { ...b, innerRadius_m: 0.003, outerRadius_m: 0.004 }] }, 'bodies[1].name');

@@ -229,7 +229,8 @@ export function buildFixture(spec: FixtureGeometrySpec): FixtureBuild {
       if (rectOverlap(rects[i].rect, rects[j].rect))
         issues.push({ code: 'design.inconsistent', path: rects[j].path, value: undefined, expected: `a section that does not overlap ${rects[i].what}`, problem: `it overlaps ${rects[i].what}` });
   if (part && !part.material) {
-    const pr: Rect = bodyRect({ name: 'part', innerRadius_m: part.innerRadius_m, outerRadius_m: part.outerRadius_m, length_m: part.length_m, material: undefined as never, ...(part.centre_m !== undefined ? { centre_m: part.centre_m } : {}) });
+    const zc = part.centre_m ?? 0;
+    const pr: Rect = { x1: part.innerRadius_m, x2: part.outerRadius_m, y1: zc - part.length_m / 2, y2: zc + part.length_m / 2 };
     windings.forEach((w, i) => {
       if (rectOverlap(pr, windingRect(w))) issues.push({ code: 'design.inconsistent', path: 'part', value: undefined, expected: `a part that does not overlap winding ${i + 1}`, problem: `it overlaps winding "${w.name}"` });
     });

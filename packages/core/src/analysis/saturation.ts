@@ -23,7 +23,7 @@
  * open coils; room temperature; one unipolar pulse. The number is for comparing designs and
  * spotting a shortfall; the grade's measured initial curve, when available, is the authority.
  */
-import { erf } from 'mathjs';
+import erf from '@stdlib/math-base-special-erf';
 import type { CoercivityMechanism } from '../materials/magnet-grades.js';
 
 /** Fraction of saturation that H_sat denotes (f(H_sat) = SATURATION_QUANTILE). */
@@ -41,7 +41,7 @@ export const SWITCHING_SPREAD: Readonly<Record<CoercivityMechanism, number>> = {
 
 /** Standard normal cumulative distribution Φ(x). */
 export function standardNormalCdf(x: number): number {
-  return 0.5 * (1 + (erf(x / Math.SQRT2) as number));
+  return 0.5 * (1 + erf(x / Math.SQRT2));
 }
 
 /**

@@ -16,7 +16,19 @@
  * Temperature differences (dimension `temperatureDifference`): K and degC count 1:1,
  * degF and degR count 5/9.
  */
-import { unit as mathUnit, type Unit } from 'mathjs';
+import { createRequire } from 'node:module';
+import type { Unit } from 'mathjs';
+
+/**
+ * mathjs is loaded on first use, not at import: loading it costs about a second of CPU, and most
+ * programs that import the library (a worker thread of a sweep, a test file, `fluxkick schema`)
+ * never parse a unit string. Same module, same results; only the time of loading moves.
+ */
+let mathjsUnit: ((s: string) => Unit) | undefined;
+function mathUnit(s: string): Unit {
+  mathjsUnit ??= (createRequire(import.meta.url)('mathjs') as typeof import('mathjs')).unit as (s: string) => Unit;
+  return mathjsUnit(s);
+}
 
 /** Exponents over the base dimensions kg, m, s, A, K. */
 export type Exponents = readonly [kg: number, m: number, s: number, A: number, K: number];

@@ -77,6 +77,11 @@ export interface StiffOptions extends IntegrateOptions {
   implicit?: number[];
 }
 
+/**
+ * The running integration's numbers live in instance fields and its parts are methods (no
+ * closures made per `integrate` call, no boxed numbers written per substep); the dense-output
+ * view is made once per instance.
+ */
 export class StiffIntegrator implements Integrator {
   readonly name = 'stiff';
   private n = -1;
@@ -106,6 +111,30 @@ export class StiffIntegrator implements Integrator {
   private readonly aw = new Float64Array(KM + 2);
   private implicitCache: number[] = [];
 
+  // ---- state of the running integration (valid during integrate and its observer calls) ----
+  private f: Rhs = () => {};
+  private imp: number[] = [];
+  private aTol: Float64Array = new Float64Array(0);
+  private rTol = 0;
+  private nd = 0;
+  private x = 0;
+  private h = 0;
+  private err = 0;
+  private hMax = 0;
+  private nEval = 0;
+  // dense output of the last accepted step
+  private dXOld = 0;
+  private dH = 1;
+  private readonly view: StepView;
+
+  constructor() {
+    const denseComponent = (i: number, xx: number): number => this.denseComponent(i, xx);
+    const dense = (xx: number, out: Float64Array): void => {
+      for (let i = 0; i < this.n; i++) out[i] = this.denseComponent(i, xx);
+    };
+    this.view = { t0: 0, t1: 0, y1: new Float64Array(0), dy1: new Float64Array(0), dense, denseComponent };
+  }
+
   private alloc(n: number, m: number): void {
     if (n === this.n && m === this.m) return;
     this.n = n;
@@ -130,6 +159,97 @@ export class StiffIntegrator implements Integrator {
     this.rhsv = new Float64Array(m);
     this.poly = new Float64Array(5 * n);
     this.s0 = mk();
+    this.view.y1 = this.y;
+    this.view.dy1 = this.f1;
+  }
+
+  private denseComponent(i: number, xx: number): number {
+    const th = (xx - this.dXOld) / this.dH;
+    if (i >= this.nd) return this.yLeft[i] + th * (this.y[i] - this.yLeft[i]);
+    const poly = this.poly;
+    const o = 5 * i;
+    return poly[o] + th * (poly[o + 1] + th * (poly[o + 2] + th * (poly[o + 3] + th * poly[o + 4])));
+  }
+
+  /** J ≈ ∂f/∂y over the implicit components, by forward differences at (x, y) with f0 = f(x, y). */
+  private jacobian(): void {
+    const { n, m, imp, y, ypert, fpert, f0, jac, aTol } = this;
+    const rTol = this.rTol;
+    for (let i = 0; i < n; i++) ypert[i] = y[i];
+    for (let c = 0; c < m; c++) {
+      const col = imp[c];
+      const yc = y[col];
+      const d = Math.sqrt(U_ROUND) * Math.max(Math.abs(yc), aTol[col] / Math.max(rTol, 1e-14), 1e-30);
+      ypert[col] = yc + d;
+      this.f(this.x, ypert, fpert);
+      this.nEval++;
+      ypert[col] = yc;
+      for (let r = 0; r < m; r++) jac[r * m + c] = (fpert[imp[r]] - f0[imp[r]]) / d;
+    }
+  }
+
+  /** Line j of the extrapolation table; false if the substeps failed (singular or non-finite). */
+  private line(j: number): boolean {
+    const { n, m, imp, y, yk, fk, f0, jac, lu, piv, rhsv, d1, mid, t } = this;
+    const x = this.x;
+    const hj = this.h / NJ[j];
+    for (let r = 0; r < m; r++) {
+      for (let c = 0; c < m; c++) lu[r * m + c] = (r === c ? 1 : 0) - hj * jac[r * m + c];
+    }
+    if (!luFactor(lu, m, piv)) return false;
+    for (let i = 0; i < n; i++) yk[i] = y[i];
+    const nj = NJ[j];
+    const half = nj / 2;
+    const dq = d1[j];
+    for (let s = 0; s < nj; s++) {
+      const fs = s === 0 ? f0 : fk;
+      if (s > 0) {
+        this.f(x + hj * s, yk, fk);
+        this.nEval++;
+      }
+      for (let r = 0; r < m; r++) rhsv[r] = hj * fs[imp[r]];
+      luSolve(lu, m, piv, rhsv);
+      // the substep's increment: explicit Euler, the implicit components from the solve;
+      // the last one's Δ/h is the line's estimate of the end slope
+      for (let i = 0; i < n; i++) dq[i] = fs[i];
+      for (let r = 0; r < m; r++) dq[imp[r]] = rhsv[r] / hj;
+      for (let i = 0; i < n; i++) yk[i] += hj * dq[i];
+      if (s + 1 === half) mid[j].set(yk);
+    }
+    const tj = t[j];
+    for (let i = 0; i < n; i++) {
+      if (!Number.isFinite(yk[i])) return false;
+      tj[i] = yk[i];
+    }
+    return true;
+  }
+
+  /** Extrapolate line j into the table and estimate the error (j ≥ 2). */
+  private extrapolate(j: number): void {
+    const { n, t, scal, y, aTol, hh, w, aw } = this;
+    const rTol = this.rTol;
+    for (let l = j; l > 1; --l) {
+      const fac = EXTRAP[j * (KM + 2) + l];
+      const tl = t[l];
+      const tl1 = t[l - 1];
+      for (let i = 0; i < n; i++) tl1[i] = tl[i] + (tl[i] - tl1[i]) / fac;
+    }
+    let err = 0;
+    const t1 = t[1];
+    const t2 = t[2];
+    for (let i = 0; i < n; i++) {
+      scal[i] = aTol[i] + rTol * Math.max(Math.abs(y[i]), Math.abs(t1[i]));
+      const e = (t1[i] - t2[i]) / scal[i];
+      err += e * e;
+    }
+    err = Math.sqrt(err / n);
+    this.err = err;
+    const exp0 = 1 / j;
+    const facMin = FAC1 ** exp0;
+    let fac = Math.min(FAC2 / facMin, Math.max(facMin, (err / SAFE1) ** exp0 / SAFE2));
+    fac = 1 / fac;
+    hh[j] = Math.min(Math.abs(this.h) * fac, this.hMax);
+    w[j] = aw[j] / hh[j];
   }
 
   integrate(
@@ -149,139 +269,65 @@ export class StiffIntegrator implements Integrator {
     }
     const m = imp.length;
     this.alloc(n, m);
+    this.f = f;
+    this.imp = imp;
+    this.nd = nd;
     // components whose dense output enters the dense-output error control (default: all dense)
     const eager = options.denseEager ?? (this.implicitCache.length === nd ? this.implicitCache : Array.from({ length: nd }, (_, i) => i));
-    const { y, f0, yk, fk, ypert, fpert, scal, t, mid, d1, jac, lu, piv, rhsv, poly, yLeft, f1, ym, hh, w, aw, s0 } = this;
+    const { y, f0, scal, t, mid, d1, poly, yLeft, f1, ym, hh, w, aw, s0, view } = this;
     const aTol = options.absTol;
     const rTol = options.relTol;
+    this.aTol = aTol;
+    this.rTol = rTol;
     y.set(y0);
-    let x = x0;
-    let nEval = 0;
+    this.x = x0;
+    this.nEval = 0;
     let nAccept = 0;
     let nReject = 0;
     let nStep = 0;
-    const hMax = Math.abs(options.maxStep ?? xEnd - x);
-    const posneg = xEnd - x >= 0 ? 1 : -1;
+    const hMax = Math.abs(options.maxStep ?? xEnd - x0);
+    this.hMax = hMax;
+    const posneg = xEnd - x0 >= 0 ? 1 : -1;
     // work per line in function evaluations: Jacobian (m), then per line n_j substeps + one LU
     const luCost = Math.max(0.5, (m * m * m) / (30 * n));
     aw[1] = m + NJ[1] + luCost;
     for (let j = 2; j <= KM + 1; j++) aw[j] = aw[j - 1] + NJ[j] + luCost;
     let k = Math.max(2, Math.min(KM - 1, Math.floor(-Math.log10(rTol + 1e-40) * 0.6 + 1.5)));
-    let h: number;
     if (options.initialStep !== undefined && options.initialStep > 0) {
-      h = posneg * Math.min(options.initialStep, hMax, Math.abs(xEnd - x));
+      this.h = posneg * Math.min(options.initialStep, hMax, Math.abs(xEnd - x0));
     } else {
-      h = posneg * Math.min(1e-4, hMax, Math.abs(xEnd - x) / 2);
+      this.h = posneg * Math.min(1e-4, hMax, Math.abs(xEnd - x0) / 2);
     }
-    let err = 0;
+    this.err = 0;
     let errOld = 1e10;
     let reject = false;
     let kc = 0;
     let fresh = true; // f0 and J valid for the current y?
     let hoptde = Infinity; // step limit from the dense-output error
     let jacAge = 0;
-    let dXOld = x0;
-    let dH = 1;
-
-    const denseComponent = (i: number, xx: number): number => {
-      const th = (xx - dXOld) / dH;
-      if (i >= nd) return yLeft[i] + th * (y[i] - yLeft[i]);
-      const o = 5 * i;
-      return poly[o] + th * (poly[o + 1] + th * (poly[o + 2] + th * (poly[o + 3] + th * poly[o + 4])));
-    };
-    const dense = (xx: number, out: Float64Array): void => {
-      for (let i = 0; i < n; i++) out[i] = denseComponent(i, xx);
-    };
-    const view: StepView = { t0: x0, t1: x0, y1: y, dy1: f1, dense, denseComponent };
-
-    const jacobian = (): void => {
-      for (let i = 0; i < n; i++) ypert[i] = y[i];
-      for (let c = 0; c < m; c++) {
-        const col = imp[c];
-        const yc = y[col];
-        const d = Math.sqrt(U_ROUND) * Math.max(Math.abs(yc), aTol[col] / Math.max(rTol, 1e-14), 1e-30);
-        ypert[col] = yc + d;
-        f(x, ypert, fpert);
-        nEval++;
-        ypert[col] = yc;
-        for (let r = 0; r < m; r++) jac[r * m + c] = (fpert[imp[r]] - f0[imp[r]]) / d;
-      }
-    };
-
-    /** Line j of the extrapolation table; false if the substeps failed (singular or non-finite). */
-    const line = (j: number): boolean => {
-      const hj = h / NJ[j];
-      for (let r = 0; r < m; r++) {
-        for (let c = 0; c < m; c++) lu[r * m + c] = (r === c ? 1 : 0) - hj * jac[r * m + c];
-      }
-      if (!luFactor(lu, m, piv)) return false;
-      for (let i = 0; i < n; i++) yk[i] = y[i];
-      const half = NJ[j] / 2;
-      for (let s = 0; s < NJ[j]; s++) {
-        const fs = s === 0 ? f0 : fk;
-        if (s > 0) {
-          f(x + hj * s, yk, fk);
-          nEval++;
-        }
-        for (let r = 0; r < m; r++) rhsv[r] = hj * fs[imp[r]];
-        luSolve(lu, m, piv, rhsv);
-        // the substep's increment: explicit Euler, the implicit components from the solve;
-        // the last one's Δ/h is the line's estimate of the end slope
-        const dq = d1[j];
-        for (let i = 0; i < n; i++) dq[i] = fs[i];
-        for (let r = 0; r < m; r++) dq[imp[r]] = rhsv[r] / hj;
-        for (let i = 0; i < n; i++) yk[i] += hj * dq[i];
-        if (s + 1 === half) mid[j].set(yk);
-      }
-      const tj = t[j];
-      for (let i = 0; i < n; i++) {
-        if (!Number.isFinite(yk[i])) return false;
-        tj[i] = yk[i];
-      }
-      return true;
-    };
-
-    /** Extrapolate line j into the table and estimate the error (j ≥ 2). */
-    const extrapolate = (j: number): void => {
-      for (let l = j; l > 1; --l) {
-        const fac = EXTRAP[j * (KM + 2) + l];
-        const tl = t[l];
-        const tl1 = t[l - 1];
-        for (let i = 0; i < n; i++) tl1[i] = tl[i] + (tl[i] - tl1[i]) / fac;
-      }
-      err = 0;
-      const t1 = t[1];
-      const t2 = t[2];
-      for (let i = 0; i < n; i++) {
-        scal[i] = aTol[i] + rTol * Math.max(Math.abs(y[i]), Math.abs(t1[i]));
-        const e = (t1[i] - t2[i]) / scal[i];
-        err += e * e;
-      }
-      err = Math.sqrt(err / n);
-      const exp0 = 1 / j;
-      const facMin = FAC1 ** exp0;
-      let fac = Math.min(FAC2 / facMin, Math.max(facMin, (err / SAFE1) ** exp0 / SAFE2));
-      fac = 1 / fac;
-      hh[j] = Math.min(Math.abs(h) * fac, hMax);
-      w[j] = aw[j] / hh[j];
-    };
+    this.dXOld = x0;
+    this.dH = 1;
+    view.t0 = x0;
+    view.t1 = x0;
 
     const result = (outcome: IntegrateResult['outcome']): IntegrateResult => ({
       outcome,
       steps: nAccept,
       rejected: nReject,
-      evaluations: nEval,
+      evaluations: this.nEval,
     });
 
     for (;;) {
+      const x = this.x;
       if (0.1 * Math.abs(xEnd - x) <= Math.abs(x) * U_ROUND) return result('done');
-      h = posneg * Math.min(Math.abs(h), Math.abs(xEnd - x), hMax, hoptde);
+      let h = posneg * Math.min(Math.abs(this.h), Math.abs(xEnd - x), hMax, hoptde);
       if (!(Math.abs(h) > 16 * U_ROUND * Math.max(Math.abs(x), Math.abs(xEnd - x0)))) return result('step-too-small');
       if ((x + 1.01 * h - xEnd) * posneg > 0) h = xEnd - x;
+      this.h = h;
       if (fresh) {
         f(x, y, f0);
-        nEval++;
-        jacobian();
+        this.nEval++;
+        this.jacobian();
         for (let i = 0; i < n; i++) s0[i] = f0[i];
         fresh = false;
       }
@@ -292,13 +338,14 @@ export class StiffIntegrator implements Integrator {
       let failed = false;
       errOld = 1e10;
       for (let j = 1; j <= Math.min(k + 1, KM); j++) {
-        if (!line(j)) {
+        if (!this.line(j)) {
           failed = true;
           break;
         }
         kc = j;
         if (j === 1) continue;
-        extrapolate(j);
+        this.extrapolate(j);
+        const err = this.err;
         if (!(err * U_ROUND < 1) || (j > 2 && err >= errOld)) {
           failed = true;
           break;
@@ -311,7 +358,7 @@ export class StiffIntegrator implements Integrator {
         if (j === k && err > (NJ[k + 1] / 2) ** 2) break; // no hope in line k + 1
       }
       if (failed) {
-        h *= 0.5;
+        this.h = h * 0.5;
         nReject++;
         reject = true;
         continue;
@@ -320,13 +367,14 @@ export class StiffIntegrator implements Integrator {
         // reject with the best proposal
         k = Math.max(2, Math.min(k, kc, KM - 1));
         if (k > 2 && w[k - 1] < w[k] * FAC3) k -= 1;
-        h = posneg * hh[k];
+        this.h = posneg * hh[k];
         nReject++;
         reject = true;
         continue;
       }
       // ---- dense output data: midpoint state and end slope, extrapolated over lines 1..kc ----
-      for (const tab of [mid, d1]) {
+      for (let q = 0; q < 2; q++) {
+        const tab = q === 0 ? mid : d1;
         for (let j = 2; j <= kc; j++) {
           for (let l = j; l > 1; --l) {
             const fac = EXTRAP[j * (KM + 2) + l];
@@ -349,19 +397,20 @@ export class StiffIntegrator implements Integrator {
       errint = Math.sqrt(errint / Math.max(1, eager.length));
       hoptde = errint > 0 ? Math.abs(h) * Math.min(4, 0.9 * (10 / errint) ** 0.25) : Infinity;
       if (errint > 10) {
-        h = posneg * hoptde;
+        this.h = posneg * hoptde;
         nReject++;
         reject = true;
         continue;
       }
       // ---- accept: dense output, observer, next order and step ----
       const xOld = x;
-      x += h;
+      const xNew = x + h;
+      this.x = xNew;
       for (let i = 0; i < n; i++) yLeft[i] = y[i];
       for (let i = 0; i < n; i++) ym[i] = mid[1][i];
       for (let i = 0; i < n; i++) y[i] = t[1][i];
-      f(x, y, f1);
-      nEval++;
+      f(xNew, y, f1);
+      this.nEval++;
       for (let i = 0; i < nd; i++) {
         const c0 = yLeft[i];
         const c1 = h * s0[i];
@@ -375,17 +424,17 @@ export class StiffIntegrator implements Integrator {
       }
       // the slope at the start of the next step: this step's extrapolated end slope
       for (let i = 0; i < nd; i++) s0[i] = d1[1][i];
-      dXOld = xOld;
-      dH = h;
+      this.dXOld = xOld;
+      this.dH = h;
       nAccept++;
       view.t0 = xOld;
-      view.t1 = x;
+      view.t1 = xNew;
       if (!observer(view)) return result('stopped');
       for (let i = 0; i < n; i++) f0[i] = f1[i];
       // J is kept between steps (any fixed J gives the same h-expansion, only stability needs
       // J close to ∂f/∂y): refreshed after rejections and every JAC_AGE accepted steps
       if (++jacAge >= JAC_AGE || reject) {
-        jacobian();
+        this.jacobian();
         jacAge = 0;
       }
       // order and step size for the next step (ODEX/SEULEX rules)
@@ -404,13 +453,14 @@ export class StiffIntegrator implements Integrator {
       }
       if (reject) {
         k = Math.min(kopt, kc);
-        h = posneg * Math.min(Math.abs(h), Math.abs(hh[k]));
+        this.h = posneg * Math.min(Math.abs(h), Math.abs(hh[k]));
         reject = false;
       } else {
-        if (kopt <= kc) h = hh[kopt];
-        else h = (hh[kc] * aw[kopt]) / aw[kc];
+        let hNew: number;
+        if (kopt <= kc) hNew = hh[kopt];
+        else hNew = (hh[kc] * aw[kopt]) / aw[kc];
         k = kopt;
-        h = posneg * Math.abs(h);
+        this.h = posneg * Math.abs(hNew);
       }
     }
   }

@@ -33,6 +33,19 @@ export function withStationWarnings(station: Station, result: ShotResult): ShotR
   return extra.length ? { ...result, warnings: [...result.warnings, ...extra] } : result;
 }
 
+/**
+ * Eddy currents: how far the field got into the part (bodies known when the fixture is given by
+ * geometry). With coupled loops, the penetration figures and the shot with their warning
+ * (`part.not-penetrated`) added once; without, the shot unchanged. Works on a shot without
+ * waveform samples too (the peak ratio needs only the probes' peaks).
+ */
+export function withPenetration(design: Design, station: Station, result: ShotResult): { result: ShotResult; penetration?: PenetrationFigures } {
+  if (station.coupled.length === 0) return { result };
+  const penetration = penetrationFigures(station, fixtureBuildOf(design)?.build.info, result);
+  const extra = penetration.warnings.filter((w) => !result.warnings.some((r) => r.code === w.code));
+  return { result: extra.length ? { ...result, warnings: [...result.warnings, ...extra] } : result, penetration };
+}
+
 export interface DesignShot {
   station: Station;
   /** The engine's shot plus the station warnings (see withStationWarnings). */
@@ -49,14 +62,7 @@ export interface DesignShot {
  */
 export function simulateDesign(design: Design, name?: string, options: SimulateOptions = {}): DesignShot {
   const station = designToStation(design, name);
-  let result = withStationWarnings(station, simulateShot(station, options));
-  // eddy currents: how far the field got into the part (bodies known when the fixture is given by geometry)
-  let penetration: PenetrationFigures | undefined;
-  if (station.coupled.length > 0) {
-    penetration = penetrationFigures(station, fixtureBuildOf(design)?.build.info, result);
-    const extra = penetration.warnings.filter((w) => !result.warnings.some((r) => r.code === w.code));
-    if (extra.length) result = { ...result, warnings: [...result.warnings, ...extra] };
-  }
+  const { result, penetration } = withPenetration(design, station, withStationWarnings(station, simulateShot(station, options)));
   const shot: DesignShot = { station, result, verdict: judgeShot(station, judgeInputsFromDesign(design), result) };
   if (penetration) shot.penetration = penetration;
   return shot;

@@ -1,9 +1,10 @@
 /**
  * One what-if point: a design (parsed, SI) → validated again by the design schema (so a swept
  * value out of a field's range is caught with its path) → Station → one simulated shot with
- * figures only (no waveform samples), plus the station's own warnings (a yoke coil's table,
- * analysis/design-shot.ts) → the verdict. The unit of work of sweeps, tolerance runs
- * and sizing, in this thread or on a worker thread.
+ * figures only (no waveform samples), plus the warnings `fluxkick shot` adds (a yoke coil's
+ * table, and `part.not-penetrated` with conductive bodies; analysis/design-shot.ts) → the
+ * verdict. The unit of work of sweeps, tolerance runs and sizing, in this thread or on a worker
+ * thread.
  *
  * Returned rows are plain data (structured-clone safe): the shot's figures, each verdict item's
  * id, value, limit, unit, margin and status, and the warnings' codes.
@@ -15,7 +16,7 @@ import { isInputError, formatInputError } from '../design/errors.js';
 import { simulateShot } from '../solve/shot.js';
 import { judgeShot } from '../analysis/verdict.js';
 import { judgeInputsFromDesign } from '../analysis/verdict-design.js';
-import { withStationWarnings } from '../analysis/design-shot.js';
+import { withPenetration, withStationWarnings } from '../analysis/design-shot.js';
 import type { ShotFigures } from '../model/result.js';
 import type { VerdictStatus } from '../model/verdict.js';
 import { withDesignValues, type DesignPath } from './designPath.js';
@@ -43,7 +44,7 @@ export function evaluateDesign(design: Design): PointResult {
   const valid = parseWithSchema(designSchema, design);
   const station = designToStation(valid);
   station.solver = { ...station.solver, samples: 0 };
-  const shot = withStationWarnings(station, simulateShot(station));
+  const { result: shot } = withPenetration(valid, station, withStationWarnings(station, simulateShot(station)));
   const verdict = judgeShot(station, judgeInputsFromDesign(valid), shot);
   return {
     figures: shot.figures,

@@ -73,9 +73,14 @@ describe('fluxkick (in-process main)', () => {
       ['wrong dimension', good.replace('capacitance: 2200 uF', 'capacitance: 2 kV'), ['bank.capacitance', '"2 kV"', 'a capacitance (F)', '2200 uF', 'line']],
       ['negative', good.replace('resistance: 25 mohm', 'resistance: -25 mohm'), ['coil.resistance', '"-25 mohm"', 'greater than 0']],
       ['NaN', good.replace('voltage: 1.6 kV', 'voltage: .nan'), ['bank.voltage', 'not a finite number']],
+      ['zero', good.replace('capacitance: 2200 uF', 'capacitance: 0 uF'), ['bank.capacitance', '"0 uF" is zero', 'greater than 0']],
+      ['Infinity', good.replace('inductance: 180 uH', 'inductance: .inf'), ['coil.inductance', 'Infinity is not a finite number']],
+      ['Infinity with a unit', good.replace('voltage: 1.6 kV', 'voltage: Infinity kV'), ['bank.voltage', '"Infinity kV" is not a finite number']],
       ['unknown field', good.replace('esl: 0.2 uH', 'esll: 0.2 uH'), ['bank.esll', 'unknown field', 'Did you mean "esl"?']],
       ['wrong enum', good.replace('kind: thyristor', 'kind: triac'), ['switch.kind', '"triac"', 'one of: thyristor, bidirectional']],
-      ['YAML syntax', good.replace('bank:\n', 'bank:\n capacitance: [1\n'), ['YAML syntax error', 'line']],
+      // the unclosed bracket sits on line 10 of the edited file (the demo's `bank:` is line 9)
+      ['YAML syntax', good.replace('bank:\n', 'bank:\n capacitance: [1\n'), ['YAML syntax error', 'line 10, column']],
+      ['YAML tab indent', good.replace('  esl: 0.2 uH\n', '  esl: 0.2 uH\n\tfoo: 1\n'), ['YAML syntax error', 'line 14, column 1', 'Tabs']],
     ];
     for (const [label, text, wants] of cases) {
       it(label, async () => {
@@ -163,6 +168,21 @@ describe('shot and demo', () => {
     expect(bad.err).toContain('no/such/dir/wave.csv');
     expect(bad.err).not.toMatch(STACK);
     expect(existsSync(join(d, 'no'))).toBe(false);
+  });
+
+  it('a fixture with conductive bodies: penetration figures in --json, the HTML and the Markdown report', async () => {
+    const d = tmp();
+    const r = await run(['shot', join(ROOT, 'examples/geometry-station.yaml'), '--json', '--html', 'r.html', '--md', 'r.md'], d);
+    expect(r.code, r.err).toBe(0);
+    const p = (JSON.parse(r.out) as { penetration: { equivalentFrequency_Hz: number; riseTime_s: number; bodies: { name: string }[]; penetration: number } }).penetration;
+    expect(p.bodies.map((b) => b.name)).toEqual(['part', 'sleeve']);
+    // f_eq = 1/(4·t_rise) (analysis/penetration.ts), exact arithmetic on the two printed numbers
+    expect(p.equivalentFrequency_Hz * 4 * p.riseTime_s).toBeCloseTo(1, 12);
+    expect(p.penetration).toBeGreaterThan(0);
+    expect(readFileSync(join(d, 'r.html'), 'utf8')).toContain('id="penetration-bodies"');
+    expect(readFileSync(join(d, 'r.md'), 'utf8')).toContain('## Penetration of the field (eddy currents)');
+    // no coupled loops, no penetration figures
+    expect(JSON.parse((await run(['shot', DEMO, '--json'])).out).penetration).toBeNull();
   });
 
   it('every example runs as a shot', async () => {

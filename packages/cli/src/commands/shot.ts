@@ -46,9 +46,9 @@ export function runShot(ctx: CliContext, designPath: string, opts: ShotOptions, 
   if (opts.csv !== undefined) {
     writeOutputFile(ctx.resolvePath(opts.csv), waveformToCsv(result), { inputs: [path], field: '--csv' });
   }
-  const written = writeReports(ctx, opts, path, { station, result, verdict, designName: station.name, subtitle: `design file: ${shownName}` });
+  const written = writeReports(ctx, opts, path, { station, result, verdict, penetration, designName: station.name, subtitle: `design file: ${shownName}` });
   if (opts.json) {
-    ctx.io.stdout(`${shotToJsonString(result, verdict, { waveform: Boolean(opts.waveform) })}\n`);
+    ctx.io.stdout(`${shotToJsonString(result, verdict, { waveform: Boolean(opts.waveform), penetration })}\n`);
   } else {
     ctx.io.stdout(`${formatShotText({ station, result, verdict, designName: station.name, color: ctx.useColor(opts.color) })}\n`);
     if (penetration) ctx.io.stdout(`\n${penetrationText(penetration)}\n`);

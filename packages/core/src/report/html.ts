@@ -5,7 +5,7 @@
  *
  * Order: the safety notice first, then the overall verdict, the station as understood (with
  * units), the figures, the verdict table, the pulse plot, and the phases, probes, loops,
- * energy balance and warnings. The tables are the same as in the text and Markdown outputs
+ * penetration of the field (when given), energy balance and warnings. The tables are the same as in the text and Markdown outputs
  * (sections.ts). Print-friendly: white ground, no colour needed to read a status.
  */
 import type { Station } from '../model/station.js';
@@ -14,6 +14,8 @@ import type { Verdict } from '../model/verdict.js';
 import { safetyNotice, escapeHtml as esc } from './safety.js';
 import { type Table, shotTables } from './sections.js';
 import { pulsePlotSvg } from './plot-pulse.js';
+import type { PenetrationFigures } from '../analysis/penetration.js';
+import { penetrationTables } from './penetration-tables.js';
 
 export interface ShotReportInput {
   station: Station;
@@ -23,6 +25,8 @@ export interface ShotReportInput {
   designName?: string;
   /** Extra line under the title, e.g. the design file and the program version. */
   subtitle?: string;
+  /** Penetration figures of a shot with coupled loops (simulateDesign's `penetration`): shown as tables after the loops. */
+  penetration?: PenetrationFigures | null;
 }
 
 /** The report's style sheet (our own: plain, print-friendly). */
@@ -43,7 +47,7 @@ th, td { text-align: left; padding: .2rem .5rem; border-bottom: 1px solid #ddd; 
 th { border-bottom: 2px solid #1a1a1a; font-weight: bold; }
 td.num, th.num { text-align: right; white-space: nowrap; }
 td.group { color: #555; }
-table.t-figures, table.t-energy, table.t-probes, table.t-loops, table.t-phases { width: auto; min-width: 55%; }
+table.t-figures, table.t-energy, table.t-probes, table.t-loops, table.t-phases, table.t-penetration { width: auto; min-width: 55%; }
 tr.status-fail td { background: #fbe3dc; }
 tr.status-warn td { background: #fdf3d6; }
 td.status { font-weight: bold; white-space: nowrap; }
@@ -137,6 +141,7 @@ export function shotReportHtml(input: ShotReportInput): string {
     section('phases'),
     section('probes'),
     section('loops'),
+    ...(input.penetration ? penetrationTables(input.penetration).map((t) => htmlTable(t)) : []),
     section('energy'),
     section('warnings'),
     '<footer>Computed by fluxkick from the station values listed above. The figures are model results: check them against a low-voltage test shot before relying on them.</footer>',

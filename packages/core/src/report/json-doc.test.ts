@@ -5,6 +5,7 @@ import { jsonOutputMarkdown } from './json-doc.js';
 import { JSON_FIELDS, jsonPaths, shotToJson } from './json.js';
 import { rlcShot } from './__fixtures__/rlc.js';
 import type { Verdict } from '../model/verdict.js';
+import type { PenetrationFigures } from '../analysis/penetration.js';
 
 const DOC = fileURLToPath(new URL('../../../../docs/json-output.md', import.meta.url));
 
@@ -24,7 +25,19 @@ describe('docs/json-output.md', () => {
       items: [{ id: 'x', item: 'X', value: 1, limit: 2, unit: 'A', margin: 0.5, status: 'pass', note: 'n' }],
       overall: 'pass',
     };
-    const paths = jsonPaths(shotToJson(result, verdict, { waveform: true }));
+    // penetration figures with one body (the values only fill the keys; no physics checked here)
+    const penetration: PenetrationFigures = {
+      riseTime_s: 1e-3,
+      equivalentFrequency_Hz: 250,
+      bodies: [{ name: 'part', isPart: true, solid: true, skinDepth_m: 0.01, size_m: 0.005, sizeOverSkinDepth: 0.5, diffusionTime_s: 1e-4, diffusionTimeBasis: 'b', riseOverDiffusion: 10 }],
+      centreToSurfaceAtPeak: 0.9,
+      centreToSurfacePeaks: 0.95,
+      staticCentreToSurface: 0.95,
+      penetration: 1,
+      centreLag_s: 1e-6,
+      warnings: [],
+    };
+    const paths = jsonPaths(shotToJson(result, verdict, { waveform: true, penetration }));
     const documented = new Set(JSON_FIELDS.map((f) => f.path));
     const doc = readFileSync(DOC, 'utf8');
     for (const p of paths) {

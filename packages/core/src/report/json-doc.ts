@@ -41,7 +41,7 @@ export function jsonOutputMarkdown(): string {
     '',
     ...table(top),
   ];
-  for (const root of ['figures', 'verdict', 'warnings', 'phases', 'solver', 'energy', 'probes', 'loops', 'waveform']) {
+  for (const root of ['figures', 'verdict', 'warnings', 'phases', 'solver', 'energy', 'probes', 'loops', 'penetration', 'waveform']) {
     lines.push('', `## \`${root}\``, '', ...table(section(root)));
   }
   lines.push('');

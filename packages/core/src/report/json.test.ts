@@ -34,7 +34,7 @@ describe('shotToJson(result, verdict, {waveform})', () => {
 
   it('has the DESIGN.md top level in a stable order, waveform only when asked', () => {
     expect(Object.keys(shotToJson(result, null, { waveform: false }))).toEqual([
-      'schemaVersion', 'figures', 'verdict', 'warnings', 'phases', 'solver', 'energy', 'probes', 'loops',
+      'schemaVersion', 'figures', 'verdict', 'warnings', 'phases', 'solver', 'energy', 'probes', 'loops', 'penetration',
     ]);
     expect(Object.keys(shotToJson(result, verdict, { waveform: true }))).toContain('waveform');
   });

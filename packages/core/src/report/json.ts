@@ -2,11 +2,12 @@
  * Machine-readable output of one shot (`fluxkick shot <design> --json`).
  *
  * Top level: `schemaVersion`, `figures`, `verdict`, `warnings`, `phases`, `solver`, `energy`,
- * `probes`, `loops`, and `waveform` only when asked. All values SI; keys in a fixed order;
+ * `probes`, `loops`, `penetration` (null without coupled loops), and `waveform` only when asked. All values SI; keys in a fixed order;
  * NaN and ±Infinity (JSON cannot hold them) become null. Every key is described once in
  * JSON_FIELDS below (figures from FIGURES in figures.ts); docs/json-output.md is generated
  * from these tables (see json-doc.ts) and a test checks that output, tables and document agree.
  */
+import { PENETRATION_WARN, type PenetrationFigures } from '../analysis/penetration.js';
 import type { ShotResult } from '../model/result.js';
 import type { Verdict } from '../model/verdict.js';
 import { FIGURES, FIGURE_KEYS } from './figures.js';
@@ -17,6 +18,8 @@ export const SHOT_JSON_SCHEMA_VERSION = 1;
 export interface ShotJsonOptions {
   /** Include the sampled waveform arrays. */
   waveform: boolean;
+  /** Penetration figures of a shot with coupled loops (simulateDesign's `penetration`); absent: `penetration` is null. */
+  penetration?: PenetrationFigures | null;
 }
 
 /** A JSON number: finite, or null for NaN/±Infinity. */
@@ -73,6 +76,26 @@ export interface ShotJson {
   };
   probes: { name: string; peakField_Apm: JsonNumber; timeOfPeak_s: JsonNumber }[];
   loops: { name: string; peakCurrent_A: JsonNumber; temperatureRise_K: JsonNumber; finalTemperature_C: JsonNumber }[];
+  penetration: {
+    riseTime_s: JsonNumber;
+    equivalentFrequency_Hz: JsonNumber;
+    bodies: {
+      name: string;
+      isPart: boolean;
+      solid: boolean;
+      skinDepth_m: JsonNumber;
+      size_m: JsonNumber;
+      sizeOverSkinDepth: JsonNumber;
+      diffusionTime_s: JsonNumber;
+      diffusionTimeBasis: string;
+      riseOverDiffusion: JsonNumber;
+    }[];
+    centreToSurfaceAtPeak: JsonNumber;
+    centreToSurfacePeaks: JsonNumber;
+    staticCentreToSurface: JsonNumber;
+    penetration: JsonNumber;
+    centreLag_s: JsonNumber;
+  } | null;
   waveform?: {
     t_s: JsonNumber[];
     capacitorVoltage_V: JsonNumber[];
@@ -147,6 +170,7 @@ export function shotToJson(result: ShotResult, verdict: Verdict | null, options:
       temperatureRise_K: num(l.temperatureRise_K),
       finalTemperature_C: num(l.finalTemperature_C),
     })),
+    penetration: options.penetration ? penetrationJson(options.penetration) : null,
   };
   if (options.waveform) {
     const w = result.waveform;
@@ -163,6 +187,31 @@ export function shotToJson(result: ShotResult, verdict: Verdict | null, options:
     };
   }
   return out;
+}
+
+const numOrNull = (x: number | null): JsonNumber => (x === null ? null : num(x));
+
+function penetrationJson(p: PenetrationFigures): NonNullable<ShotJson['penetration']> {
+  return {
+    riseTime_s: num(p.riseTime_s),
+    equivalentFrequency_Hz: num(p.equivalentFrequency_Hz),
+    bodies: p.bodies.map((b) => ({
+      name: b.name,
+      isPart: b.isPart,
+      solid: b.solid,
+      skinDepth_m: num(b.skinDepth_m),
+      size_m: num(b.size_m),
+      sizeOverSkinDepth: num(b.sizeOverSkinDepth),
+      diffusionTime_s: num(b.diffusionTime_s),
+      diffusionTimeBasis: b.diffusionTimeBasis,
+      riseOverDiffusion: num(b.riseOverDiffusion),
+    })),
+    centreToSurfaceAtPeak: numOrNull(p.centreToSurfaceAtPeak),
+    centreToSurfacePeaks: numOrNull(p.centreToSurfacePeaks),
+    staticCentreToSurface: numOrNull(p.staticCentreToSurface),
+    penetration: numOrNull(p.penetration),
+    centreLag_s: numOrNull(p.centreLag_s),
+  };
 }
 
 /** Serialized with two-space indentation and a final newline. */
@@ -238,6 +287,24 @@ export const JSON_FIELDS: readonly JsonField[] = [
   { path: 'loops[].peakCurrent_A', type: 'number', unit: 'A', description: 'Peak absolute loop current.' },
   { path: 'loops[].temperatureRise_K', type: 'number', unit: 'K', description: 'Adiabatic temperature rise of the loop.' },
   { path: 'loops[].finalTemperature_C', type: 'number', unit: '°C', description: 'Loop temperature at the end.' },
+  { path: 'penetration', type: 'object | null', unit: '', description: 'How far the field got into the part through the eddy currents of the coupled loops (analysis/penetration.ts); null when the station has no coupled loops. Its warning, `part.not-penetrated`, is in `warnings`.' },
+  { path: 'penetration.riseTime_s', type: 'number', unit: 's', description: 'Time from firing to the peak coil current, t_rise.' },
+  { path: 'penetration.equivalentFrequency_Hz', type: 'number', unit: 'Hz', description: 'Equivalent frequency of the pulse, 1/(4·t_rise) (a rise to peak taken as a quarter period).' },
+  { path: 'penetration.bodies', type: 'array', unit: '', description: 'The conductive bodies of a fixture given by geometry; empty when the loops were given as numbers.' },
+  { path: 'penetration.bodies[].name', type: 'string', unit: '', description: 'Body name (`part` for the part itself).' },
+  { path: 'penetration.bodies[].isPart', type: 'boolean', unit: '', description: 'True for the part being magnetized.' },
+  { path: 'penetration.bodies[].solid', type: 'boolean', unit: '', description: 'True for a solid cylinder (size = radius), false for a tube (size = wall thickness).' },
+  { path: 'penetration.bodies[].skinDepth_m', type: 'number', unit: 'm', description: 'Skin depth δ = √(2ρ/(ω·µ0)) at the equivalent frequency.' },
+  { path: 'penetration.bodies[].size_m', type: 'number', unit: 'm', description: 'Radius of a solid body, wall thickness of a tube.' },
+  { path: 'penetration.bodies[].sizeOverSkinDepth', type: 'number', unit: '1', description: 'size_m / skinDepth_m: well above 1 means the field stays near the surface during the rise.' },
+  { path: 'penetration.bodies[].diffusionTime_s', type: 'number', unit: 's', description: 'Magnetic diffusion time of the body (µ0·σ·a² for a solid cylinder; see `diffusionTimeBasis`).' },
+  { path: 'penetration.bodies[].diffusionTimeBasis', type: 'string', unit: '', description: 'The formula behind `diffusionTime_s`.' },
+  { path: 'penetration.bodies[].riseOverDiffusion', type: 'number', unit: '1', description: 'riseTime_s / diffusionTime_s: well above 1 means the field gets in.' },
+  { path: 'penetration.centreToSurfaceAtPeak', type: 'number | null', unit: '1', description: 'Field at the part’s centre / field at its surface at the moment the surface field peaks (probes `part` and `part surface`); null without both probes.' },
+  { path: 'penetration.centreToSurfacePeaks', type: 'number | null', unit: '1', description: 'Peak field at the centre / peak field at the surface; null without both probes.' },
+  { path: 'penetration.staticCentreToSurface', type: 'number | null', unit: '1', description: 'The same ratio without eddy currents (from the coil’s field per ampere at the two points).' },
+  { path: 'penetration.penetration', type: 'number | null', unit: '1', description: `centreToSurfacePeaks / staticCentreToSurface: 1 when fully penetrated; below ${PENETRATION_WARN} raises \`part.not-penetrated\`.` },
+  { path: 'penetration.centreLag_s', type: 'number | null', unit: 's', description: 'Time of the centre’s peak minus time of the surface’s peak.' },
   { path: 'waveform', type: 'object', unit: '', description: 'Sampled waveforms; present only when asked for (`--waveform`). Every array has the length of `t_s`.' },
   { path: 'waveform.t_s', type: 'array of number', unit: 's', description: 'Sample times from firing.' },
   { path: 'waveform.capacitorVoltage_V', type: 'array of number', unit: 'V', description: 'Bank voltage.' },

@@ -11,6 +11,7 @@ import { shotTables } from './sections.js';
 import { safetyNotice } from './safety.js';
 import { pulsePlotSvg } from './plot-pulse.js';
 import type { ShotReportInput } from './html.js';
+import { penetrationTables } from './penetration-tables.js';
 
 function cell(s: string): string {
   return s.replace(/\|/g, '\\|').replace(/\s+/g, ' ');
@@ -61,6 +62,7 @@ export function shotReportMarkdown(input: ShotReportInput, options: MarkdownOpti
     '',
     ...(tables.has('probes') ? [section('probes'), ''] : []),
     ...(tables.has('loops') ? [section('loops'), ''] : []),
+    ...(input.penetration ? penetrationTables(input.penetration).flatMap((t) => [markdownTable(t), '']) : []),
     section('energy'),
     '',
     section('warnings'),

@@ -30,6 +30,27 @@ describe('histogramSvg(input)', () => {
   });
 });
 
+describe('histogramSvg(input): a limit away from the values', () => {
+  // 1000 values spread evenly over [2.9, 3.2] MA/m (peak fields of a tolerance run), the required field at 2.4 MA/m
+  const spread = Array.from({ length: 1000 }, (_, i) => 2.9e6 + (0.3e6 * (i + 0.5)) / 1000);
+  const svg = histogramSvg({ values: spread, name: 'peak field', unit: 'A/m', limit: { value: 2.4e6, label: 'required field', kind: 'min' } });
+  const els = allElements(parseXml(svg));
+  const bars = els.filter((e) => e.name === 'rect' && (e.attrs.class ?? '').startsWith('bar'));
+
+  it('bins the values over their own range (d3 ticks(20) on [2.9, 3.2] MA/m: step 20 kA/m, 15 bars), not over the axis stretched to the limit', () => {
+    expect(bars).toHaveLength(15);
+    expect(bars.reduce((a, b) => a + Number(b.attrs['data-count']), 0)).toBe(1000);
+    for (const b of bars) expect(Number(b.attrs['data-x1']) - Number(b.attrs['data-x0'])).toBeCloseTo(2e4, 6);
+  });
+
+  it('keeps the limit rule off the axis line: it is drawn right of the plot’s left edge', () => {
+    const rule = els.find((e) => e.name === 'line' && e.attrs.class === 'limit')!;
+    const axisLeft = 86; // x0 of the plot area (plot-histogram.ts)
+    expect(Number(rule.attrs.x1)).toBeGreaterThan(axisLeft + 5);
+    expect(svg).toContain('beyond the limit (hatched bars): 0 (0 %)');
+  });
+});
+
 describe('histogramSummary(input)', () => {
   it('gives R-7 quantiles (Hyndman & Fan 1996, type 7: the d3-array definition)', () => {
     // type 7: h = (n − 1)·p; median of 0.5..99.5 = 50; 5 %: h = 4.95 -> 4.5 + 0.95 = 5.45

@@ -1,7 +1,8 @@
 /**
  * A histogram of the outcomes of a tolerance run as a standalone SVG: one figure (e.g. the peak
  * field at the part) over many runs with randomly drawn component values. Bins come from
- * d3-array's `bin()` with thresholds at the ticks of a nice d3-scale domain; the limit is drawn
+ * d3-array's `bin()` with thresholds at the ticks of a nice d3-scale domain over the values
+ * themselves (about 20 bins, however far away the limit is); the limit is drawn
  * as a labelled rule, bars beyond it are hatched (not only coloured), and the count, median and
  * the 5 % / 95 % quantiles (d3-array `quantile`, R-7 linear interpolation) are written out.
  */
@@ -79,15 +80,27 @@ export function histogramSvg(input: HistogramInput, options: HistogramOptions = 
     lo -= pad;
     hi += pad;
   }
-  const x = scaleLinear().domain([lo, hi]).range([x0, x1]).nice(options.bins ?? 20);
-  // bin edges at the axis ticks, plus one at the limit so no bar straddles it
-  const edges = x.ticks(options.bins ?? 20);
-  if (input.limit && Number.isFinite(input.limit.value) && !edges.includes(input.limit.value)) {
-    edges.push(input.limit.value);
+  const nBins = options.bins ?? 20;
+  // bin edges at nice ticks of the values' own range (a limit far from the values widens the
+  // axis, not the bins), plus one at the limit so no bar straddles it
+  const vLo = values.length ? Math.min(...values) : lo;
+  const vHi = values.length ? Math.max(...values) : hi;
+  const binScale = scaleLinear().domain(vHi > vLo ? [vLo, vHi] : [lo, hi]).nice(nBins);
+  const [bLo, bHi] = binScale.domain();
+  // a limit outside the values gets some room, so its rule does not sit on the axis line
+  const room = input.limit && (input.limit.value <= bLo || input.limit.value >= bHi) ? 0.03 * (hi - lo) : 0;
+  const x = scaleLinear()
+    .domain([Math.min(lo - room, bLo), Math.max(hi + room, bHi)])
+    .range([x0, x1])
+    .nice(nBins);
+  const edges = binScale.ticks(nBins);
+  const limValue = input.limit?.value;
+  if (limValue !== undefined && limValue > bLo && limValue < bHi && !edges.includes(limValue)) {
+    edges.push(limValue);
     edges.sort((a, b) => a - b);
   }
   const bins = bin()
-    .domain(x.domain() as [number, number])
+    .domain([bLo, bHi])
     .thresholds(edges)(values);
   const maxCount = Math.max(1, ...bins.map((b) => b.length));
   const y = scaleLinear().domain([0, maxCount * 1.12]).range([yBottom, yTop]).nice(5);

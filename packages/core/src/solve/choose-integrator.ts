@@ -31,9 +31,9 @@ export function loopDecayRate(rhs: CircuitRhs): number {
   if (!invert(net.loopL_H, n, inv, new Float64Array(n * n), new Int32Array(n), new Float64Array(n))) return Infinity;
   const r = Float64Array.from(net.loops, (l) => l.resistance20_Ohm * Math.max(1, 1 + l.tempCoeff_perK * (l.initialTemperature_C - 20)));
   let x = new Float64Array(n).fill(1);
+  let y = new Float64Array(n);
   let lambda = 0;
   for (let it = 0; it < 60; it++) {
-    const y = new Float64Array(n);
     for (let i = 0; i < n; i++) {
       let s = 0;
       for (let j = 0; j < n; j++) s += inv[i * n + j] * r[j] * x[j];
@@ -48,7 +48,9 @@ export function loopDecayRate(rhs: CircuitRhs): number {
       break;
     }
     lambda = norm;
+    const swap = x;
     x = y;
+    y = swap;
   }
   return lambda;
 }

@@ -118,6 +118,9 @@ export class GbsIntegrator implements Integrator {
   private readonly hh = new Float64Array(KM + 2);
   private readonly w = new Float64Array(KM + 2);
   private readonly coef = new Float64Array(31);
+  /** Scratch columns of ySafe and fSafe for the component being built (buildOne). */
+  private readonly ysCol = new Float64Array(KM + 2);
+  private readonly fsCol = new Float64Array(LF_SAFE + 1);
 
   // ---- state of the running integration (valid during integrate and its observer calls) ----
   private f: Rhs = () => {};
@@ -511,48 +514,55 @@ export class GbsIntegrator implements Integrator {
    * polynomial is independent of the others, so only what the observer reads is built.
    */
   private buildOne(i: number): void {
-    const { dens, ySafe, fSafe, t, yh2, dzLeft, yLeft, nd } = this;
+    const { dens, t, yh2, dzLeft, yLeft, nd } = this;
     const hD = this.dH;
     const kcD = this.stepKc;
     const km = this.kmit;
+    // component i's midpoint values and stored derivatives, copied into contiguous scratch rows
+    // (the updates below touch only component i, so working on a copy changes nothing else)
+    const ys = this.ysCol;
+    const fs = this.fsCol;
+    for (let l = 1; l <= kcD; l++) ys[l] = this.ySafe[l][i];
+    const fTop = IPOINT[kcD + 1];
+    for (let l = 0; l <= fTop; l++) fs[l] = this.fSafe[l][i];
     dens[i] = yLeft[i];
     dens[nd + i] = hD * dzLeft[i];
     dens[2 * nd + i] = t[1][i];
     // solution at the midpoint
     for (let j = 2; j <= kcD; ++j) {
       for (let l = j; l >= 2; --l) {
-        const sl = ySafe[l][i];
-        ySafe[l - 1][i] = sl + (sl - ySafe[l - 1][i]) / EXTRAP[j * (KM + 2) + l];
+        const sl = ys[l];
+        ys[l - 1] = sl + (sl - ys[l - 1]) / EXTRAP[j * (KM + 2) + l];
       }
     }
-    dens[4 * nd + i] = ySafe[1][i];
+    dens[4 * nd + i] = ys[1];
     dens[3 * nd + i] = yh2[i] * hD;
     for (let kmi = 1; kmi <= km; ++kmi) {
       // kmi-th derivative at the midpoint
       const kbeg = ((kmi + 1) / 2) | 0;
       for (let kk = kbeg; kk <= kcD; ++kk) {
-        ySafe[kk][i] = fSafe[IPOINT[kk + 1] - 2 * kk + kmi][i] * FACNJ[kk * (2 * KM + 2) + kmi];
+        ys[kk] = fs[IPOINT[kk + 1] - 2 * kk + kmi] * FACNJ[kk * (2 * KM + 2) + kmi];
       }
       for (let j = kbeg + 1; j <= kcD; ++j) {
         for (let l = j; l >= kbeg + 1; --l) {
-          const sl = ySafe[l][i];
-          ySafe[l - 1][i] = sl + (sl - ySafe[l - 1][i]) / EXTRAP[j * (KM + 2) + l];
+          const sl = ys[l];
+          ys[l - 1] = sl + (sl - ys[l - 1]) / EXTRAP[j * (KM + 2) + l];
         }
       }
-      dens[(kmi + 4) * nd + i] = ySafe[kbeg][i] * hD;
+      dens[(kmi + 4) * nd + i] = ys[kbeg] * hD;
       if (kmi === km) continue;
       // differences
       for (let kk = ((kmi + 2) / 2) | 0; kk <= kcD; ++kk) {
         const lbeg = IPOINT[kk + 1];
         let lend = IPOINT[kk] + kmi + 1;
         if (kmi === 1) lend += 2;
-        for (let l = lbeg; l >= lend; l -= 2) fSafe[l][i] -= fSafe[l - 2][i];
-        if (kmi === 1) fSafe[lend - 2][i] -= dzLeft[i];
+        for (let l = lbeg; l >= lend; l -= 2) fs[l] -= fs[l - 2];
+        if (kmi === 1) fs[lend - 2] -= dzLeft[i];
       }
       for (let kk = ((kmi + 2) / 2) | 0; kk <= kcD; ++kk) {
         const lbeg = IPOINT[kk + 1] - 1;
         const lend = IPOINT[kk] + kmi + 2;
-        for (let l = lbeg; l >= lend; l -= 2) fSafe[l][i] -= fSafe[l - 2][i];
+        for (let l = lbeg; l >= lend; l -= 2) fs[l] -= fs[l - 2];
       }
     }
     this.interpOne(i, km);

@@ -114,6 +114,8 @@ export class StiffIntegrator implements Integrator {
   // ---- state of the running integration (valid during integrate and its observer calls) ----
   private f: Rhs = () => {};
   private imp: number[] = [];
+  /** The explicit components (all not in imp). */
+  private expl: number[] = [];
   private aTol: Float64Array = new Float64Array(0);
   private rTol = 0;
   private nd = 0;
@@ -190,7 +192,7 @@ export class StiffIntegrator implements Integrator {
 
   /** Line j of the extrapolation table; false if the substeps failed (singular or non-finite). */
   private line(j: number): boolean {
-    const { n, m, imp, y, yk, fk, f0, jac, lu, piv, rhsv, d1, mid, t } = this;
+    const { n, m, imp, expl, y, yk, fk, f0, jac, lu, piv, rhsv, d1, mid, t } = this;
     const x = this.x;
     const hj = this.h / NJ[j];
     for (let r = 0; r < m; r++) {
@@ -209,12 +211,15 @@ export class StiffIntegrator implements Integrator {
       }
       for (let r = 0; r < m; r++) rhsv[r] = hj * fs[imp[r]];
       luSolve(lu, m, piv, rhsv);
-      // the substep's increment: explicit Euler, the implicit components from the solve;
-      // the last one's Δ/h is the line's estimate of the end slope
-      for (let i = 0; i < n; i++) dq[i] = fs[i];
-      for (let r = 0; r < m; r++) dq[imp[r]] = rhsv[r] / hj;
-      for (let i = 0; i < n; i++) yk[i] += hj * dq[i];
+      // the substep's increment: explicit Euler, the implicit components from the solve
+      for (let e = 0; e < expl.length; e++) yk[expl[e]] += hj * fs[expl[e]];
+      for (let r = 0; r < m; r++) yk[imp[r]] += rhsv[r];
       if (s + 1 === half) mid[j].set(yk);
+      if (s + 1 === nj) {
+        // the last substep's Δ/h is the line's estimate of the end slope
+        for (let i = 0; i < n; i++) dq[i] = fs[i];
+        for (let r = 0; r < m; r++) dq[imp[r]] = rhsv[r] / hj;
+      }
     }
     const tj = t[j];
     for (let i = 0; i < n; i++) {
@@ -270,6 +275,12 @@ export class StiffIntegrator implements Integrator {
     const m = imp.length;
     this.alloc(n, m);
     this.f = f;
+    if (this.imp !== imp || this.expl.length + imp.length !== n) {
+      const isImp = new Uint8Array(n);
+      for (const i of imp) isImp[i] = 1;
+      this.expl = [];
+      for (let i = 0; i < n; i++) if (!isImp[i]) this.expl.push(i);
+    }
     this.imp = imp;
     this.nd = nd;
     // components whose dense output enters the dense-output error control (default: all dense)

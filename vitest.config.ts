@@ -12,5 +12,7 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 60_000,
     pool: 'forks',
+    // every in-process shot must close its energy balance to 1e-6 (tests/support/energy-balance.setup.ts)
+    setupFiles: ['tests/support/energy-balance.setup.ts'],
   },
 });

@@ -14,6 +14,14 @@ describe('summary tables', () => {
     expect(stationTable({ ...station, freewheel: null }).rows.map((r) => r.cells.join(' | '))).toContain('freewheel diode | fitted | none');
   });
 
+  it('the station table gives each coupled loop one row with L, M, R at 20 °C and heat capacity', () => {
+    const loop = (name: string) => ({ name, inductance_H: 18e-9, mutualToCoil_H: 1.24e-6, resistance20_Ohm: 8.36e-3, tempCoeff_perK: 0, heatCapacity_JpK: 1.97, initialTemperature_C: 20 });
+    const withLoops = { ...station, coupled: Array.from({ length: 30 }, (_, k) => loop(`shell ${k + 1}`)) };
+    const rows = stationTable(withLoops).rows.filter((r) => r.cells[0].startsWith('loop '));
+    expect(rows).toHaveLength(30);
+    expect(rows[0].cells).toEqual(['loop "shell 1"', 'L · M to coil · R at 20 °C · heat capacity', '18 nH · 1.24 µH · 8.36 mΩ · 1.97 J/K']);
+  });
+
   it('the figures table has one row per documented figure', () => {
     expect(figuresTable(result).rows).toHaveLength(FIGURE_KEYS.length);
   });

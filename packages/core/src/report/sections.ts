@@ -74,12 +74,13 @@ export function stationTable(station: Station): Table {
   if (c.mass_kg !== undefined) add('coil', 'conductor mass', q(c.mass_kg * 1000, 'g'));
   if (c.conductorArea_m2 !== undefined) add('coil', 'conductor cross-section', q(c.conductorArea_m2, 'm²'));
   if (c.conductorLength_m !== undefined) add('coil', 'conductor length', q(c.conductorLength_m, 'm'));
+  // one row per coupled loop (a fixture given by geometry has dozens of eddy shells)
   for (const loop of station.coupled) {
-    const e = `loop "${loop.name}"`;
-    add(e, 'inductance', q(loop.inductance_H, 'H'));
-    add(e, 'mutual inductance to coil', q(loop.mutualToCoil_H, 'H'));
-    add(e, 'resistance at 20 °C', q(loop.resistance20_Ohm, 'Ω'));
-    add(e, 'heat capacity', q(loop.heatCapacity_JpK, 'J/K'));
+    add(
+      `loop "${loop.name}"`,
+      'L · M to coil · R at 20 °C · heat capacity',
+      [q(loop.inductance_H, 'H'), q(loop.mutualToCoil_H, 'H'), q(loop.resistance20_Ohm, 'Ω'), q(loop.heatCapacity_JpK, 'J/K')].join(' · '),
+    );
   }
   for (const [k, p] of station.probes.entries()) {
     add(`probe "${p.name}"${k === 0 ? ' (the part)' : ''}`, 'field per coil ampere', `${formatPlain(p.coil_ApmPerA)} (A/m)/A`);

@@ -66,6 +66,27 @@ describe('fluxkick (in-process main)', () => {
     expect(JSON.parse(j.out)).toMatchObject({ bank: { capacitance_F: 2.2e-3, voltage_V: 1600 } });
   });
 
+  it('check on a fixture given by geometry prints the derived numbers, the published estimates beside ours and the bodies', async () => {
+    const r = await run(['check', 'examples/geometry-station.yaml']);
+    expect(r.code, r.err).toBe(0);
+    for (const want of [
+      'fixture (derived from the geometry)',
+      'turns',
+      'resistance at 20 °C',
+      'inductance',
+      'field per ampere over the part, min',
+      'field per ampere over the part, mean',
+      'Wheeler multilayer',
+      'Montgomery thick solenoid',
+      'fixture body sleeve (derived)',
+      'diffusion time',
+    ]) expect(r.out).toContain(want);
+    // the same numbers as `fluxkick coil` on the same file (one geometry code behind both commands)
+    const coil = JSON.parse((await run(['coil', 'examples/geometry-station.yaml', '--json'])).out) as { coil: { turns: number } };
+    expect(r.out).toMatch(new RegExp(`turns\\s+${coil.coil.turns}\\b`));
+    expect(r.out).toMatch(/SAFETY/);
+  });
+
   describe('bad input -> exit 2, short message naming path, value and expectation, no stack', () => {
     const d = tmp();
     const good = readFileSync(DEMO, 'utf8');

@@ -7,7 +7,7 @@ export { safetyNotice, safetyHeadline } from './report/safety.js';
 export { formatShotText } from './report/text.js';
 export { shotToJson, shotToJsonString, JSON_FIELDS } from './report/json.js';
 export { waveformToCsv } from './report/csv.js';
-export { writeOutputFile } from './report/write.js';
+export { writeOutputFile, checkOutputPath } from './report/write.js';
 export { formatQuantity } from './units/format.js';
 export { pulsePlotSvg } from './report/plot-pulse.js';
 export { mapPlotSvg } from './report/plot-map.js';

@@ -85,6 +85,23 @@ describe('fluxkick sweep', () => {
     expect(r.err).not.toMatch(/\n\s+at /); // no stack
   });
 
+  it('an output path that cannot be written, or is the design, is refused before any shot: exit 2 at once', async () => {
+    // a million-point grid would run for hours: a prompt exit 2 shows the check came first
+    const huge = ['--vary', 'bank.capacitance=1m:5m:1000', '--vary', 'bank.voltage=1k:2k:1000'];
+    const svg = await run(['sweep', 'bench.yaml', ...huge, '--svg', 'no-such-folder/map.svg']);
+    expect(svg.code).toBe(2);
+    expect(svg.err).toContain('--svg');
+    expect(svg.err).toContain('no-such-folder');
+    expect(svg.out).toBe('');
+    const csv = await run(['sweep', 'bench.yaml', ...huge, '--csv', 'bench.yaml']);
+    expect(csv.code).toBe(2);
+    expect(csv.err).toMatch(/refusing to write over it/);
+    const html = await run(['sweep', 'bench.yaml', '--tolerance', 'bank.voltage=±3%', '--samples', '1000000', '--html', 'no-such-folder/t.html']);
+    expect(html.code).toBe(2);
+    expect(html.err).toContain('--html');
+    expect(readFileSync(join(dir, 'bench.yaml'), 'utf8')).toMatch(/bank/);
+  }, 30_000);
+
   it('tolerance run: a fixed seed gives the identical run; --html and --svg carry the histogram', async () => {
     const args = ['sweep', 'bench.yaml', '--tolerance', 'bank.capacitance=±10%', '--tolerance', 'coil.resistance=+-5%', '--samples', '20', '--seed', '9', '--json'];
     const a = JSON.parse((await run(args)).out) as Record<string, unknown>;

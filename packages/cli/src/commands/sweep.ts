@@ -34,6 +34,7 @@ import {
   toleranceToText,
   tryParseQuantity,
   writeOutputFile,
+  checkOutputPath,
   type Design,
 } from '@fluxkick/core';
 import type { CliContext } from '../context.js';
@@ -135,6 +136,12 @@ function emit(ctx: CliContext, file: string, text: string, field: string, inputs
   else writeOutputFile(ctx.resolvePath(file), text, { inputs, field });
 }
 
+/** Before a run that may take minutes: each output file (not "-") must be writable and not the design. */
+function checkOutputs(ctx: CliContext, designPath: string, outputs: readonly (readonly [string | undefined, string])[]): void {
+  const inputs = [ctx.resolvePath(designPath)];
+  for (const [file, field] of outputs) if (file !== undefined && file !== '-') checkOutputPath(ctx.resolvePath(file), { inputs, field });
+}
+
 async function runGrid(ctx: CliContext, designPath: string, design: Design, opts: SweepOptions): Promise<void> {
   if (opts.vary.length > 3) throw optionError('--vary', opts.vary, `${opts.vary.length} fields given`, 'one to three --vary options');
   if (opts.html !== undefined) throw optionError('--html', opts.html, 'an HTML page is made for tolerance runs only', '--html with --tolerance; for a sweep use --svg, --csv or --json');
@@ -145,6 +152,7 @@ async function runGrid(ctx: CliContext, designPath: string, design: Design, opts
     seen.add(a.path.text);
   }
   if (opts.svg !== undefined && axes.length < 2) throw optionError('--svg', opts.svg, 'a map needs two varied fields', 'two or three --vary options with --svg');
+  checkOutputs(ctx, designPath, [[opts.csv, '--csv'], [opts.svg, '--svg']]);
   const points = axes.reduce((n, a) => n * a.values.length, 1);
   const threads = threadsFor(opts, points);
   const { value: result, interrupted } = await withRunControls(ctx, opts.progress !== false, 'sweep', (signal, onProgress) =>
@@ -175,6 +183,7 @@ async function runMonteCarlo(ctx: CliContext, designPath: string, design: Design
     throw optionError('--distribution', distribution, `"${distribution}" is not a distribution`, 'uniform (default: every value within ±x equally likely) or normal (±x is 3σ, truncated there)');
   }
   const required = fieldOption(opts.targetField);
+  checkOutputs(ctx, designPath, [[opts.csv, '--csv'], [opts.svg, '--svg'], [opts.html, '--html']]);
   const threads = threadsFor(opts, samples);
   const { value: result, interrupted } = await withRunControls(ctx, opts.progress !== false, 'tolerance run', (signal, onProgress) =>
     runTolerance(design, fields, { samples, seed, distribution, signal, onProgress, ...(required !== undefined ? { requiredField_Apm: required } : {}), ...(threads !== undefined ? { threads } : {}) }),

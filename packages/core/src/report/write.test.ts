@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it, vi } from 'vitest';
 import { linkSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { writeOutputFile } from './write.js';
+import { checkOutputPath, writeOutputFile } from './write.js';
 import { isInputError, type InputError } from '../design/errors.js';
 
 /** Failure injection: writeSync writes `failAfter_bytes` bytes, then fails as a full disk would (-1: off). */
@@ -91,5 +91,18 @@ describe('writeOutputFile(path, content, {inputs})', () => {
     expect(inject.written_bytes).toBe(10); // the failure came after part of the content was written
     expect(readFileSync(q, 'utf8')).toBe('old');
     expect(readdirSync(dir).filter((f) => f.startsWith('.c.txt.') && f.endsWith('.tmp'))).toEqual([]);
+  });
+
+  it('checkOutputPath refuses what writeOutputFile would refuse, before any work, and leaves the folder as it was', () => {
+    const design = join(dir, 'check-design.yaml');
+    writeFileSync(design, 'name: x\n');
+    const before = readdirSync(dir).sort();
+    expect(thrown(() => checkOutputPath(design, { inputs: [design], field: '--svg' })).code).toBe('output.is-input');
+    const missing = thrown(() => checkOutputPath(join(dir, 'no-such-folder', 'map.svg'), { field: '--svg' }));
+    expect(missing.code).toBe('output.unwritable');
+    expect(missing.message).toContain('--svg');
+    expect(thrown(() => checkOutputPath(dir)).code).toBe('output.unwritable'); // a folder
+    checkOutputPath(join(dir, 'fine.svg'), { inputs: [design] }); // writable: no throw, nothing created
+    expect(readdirSync(dir).sort()).toEqual(before);
   });
 });

@@ -11,7 +11,7 @@
  * the design. Failures become an InputError with code `output.unwritable` or `output.is-input`
  * naming the path (the CLI exits 2).
  */
-import { closeSync, fsyncSync, openSync, renameSync, statSync, unlinkSync, writeSync } from 'node:fs';
+import { closeSync, existsSync, fsyncSync, openSync, renameSync, statSync, unlinkSync, writeSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { randomBytes } from 'node:crypto';
 import { InputError } from '../design/errors.js';
@@ -56,10 +56,44 @@ function plainReason(err: unknown, folder: string): string {
   }
 }
 
-/** Write `content` to `path` atomically; throws InputError when the path is an input or cannot be written. */
-export function writeOutputFile(path: string, content: string | Uint8Array, options: WriteOutputOptions = {}): void {
+function unwritable(path: string, field: string, err: unknown, folder: string): InputError {
+  return new InputError({
+    code: 'output.unwritable',
+    path: field,
+    value: path,
+    expected: 'a writable file path in an existing folder',
+    problem: `cannot write "${path}" (${plainReason(err, folder)})`,
+  });
+}
+
+const tempNameFor = (target: string) => join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+
+/**
+ * Check, before a long run, that `path` can be written later: not an input file, not a folder,
+ * and a temporary file can be created (and is removed again) in its folder. Throws the same
+ * InputError as writeOutputFile; leaves nothing behind.
+ */
+export function checkOutputPath(path: string, options: WriteOutputOptions = {}): void {
   const field = options.field ?? 'output';
-  for (const input of options.inputs ?? []) {
+  refuseInputs(path, field, options.inputs ?? []);
+  const target = resolve(path);
+  const tmp = tempNameFor(target);
+  try {
+    if (existsSync(target) && statSync(target).isDirectory()) throw Object.assign(new Error('is a folder'), { code: 'EISDIR' });
+    closeSync(openSync(tmp, 'wx', 0o644));
+    unlinkSync(tmp);
+  } catch (err) {
+    try {
+      unlinkSync(tmp);
+    } catch {
+      /* never created */
+    }
+    throw unwritable(path, field, err, dirname(target));
+  }
+}
+
+function refuseInputs(path: string, field: string, inputs: readonly string[]): void {
+  for (const input of inputs) {
     if (sameFile(path, input)) {
       throw new InputError({
         code: 'output.is-input',
@@ -70,8 +104,14 @@ export function writeOutputFile(path: string, content: string | Uint8Array, opti
       });
     }
   }
+}
+
+/** Write `content` to `path` atomically; throws InputError when the path is an input or cannot be written. */
+export function writeOutputFile(path: string, content: string | Uint8Array, options: WriteOutputOptions = {}): void {
+  const field = options.field ?? 'output';
+  refuseInputs(path, field, options.inputs ?? []);
   const target = resolve(path);
-  const tmp = join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  const tmp = tempNameFor(target);
   let fd: number | undefined;
   try {
     fd = openSync(tmp, 'wx', 0o644);
@@ -95,13 +135,6 @@ export function writeOutputFile(path: string, content: string | Uint8Array, opti
     } catch {
       /* never created, or already renamed */
     }
-    const reason = plainReason(err, dirname(target));
-    throw new InputError({
-      code: 'output.unwritable',
-      path: field,
-      value: path,
-      expected: 'a writable file path in an existing folder',
-      problem: `cannot write "${path}" (${reason})`,
-    });
+    throw unwritable(path, field, err, dirname(target));
   }
 }

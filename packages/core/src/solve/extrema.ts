@@ -13,6 +13,33 @@ export interface Quantity {
   slope(y: Float64Array, dy: Float64Array): number;
 }
 
+/**
+ * A quantity linear in the state, q = Σ w_k·y[i_k] (a current, a diode current i_L − i_s, the field of a
+ * linear coil and its loops), slope Σ w_k·dy[i_k]. One class for all of them, so that the trackers'
+ * calls stay monomorphic (the JavaScript engine inlines them instead of boxing every returned number).
+ */
+export class LinearQuantity implements Quantity {
+  private readonly idx: Int32Array;
+  private readonly w: Float64Array;
+
+  constructor(indices: ArrayLike<number>, weights: ArrayLike<number>) {
+    this.idx = Int32Array.from(indices);
+    this.w = Float64Array.from(weights);
+  }
+
+  value(y: Float64Array): number {
+    let s = 0;
+    for (let k = 0; k < this.idx.length; k++) s += this.w[k] * y[this.idx[k]];
+    return s;
+  }
+
+  slope(_y: Float64Array, dy: Float64Array): number {
+    let s = 0;
+    for (let k = 0; k < this.idx.length; k++) s += this.w[k] * dy[this.idx[k]];
+    return s;
+  }
+}
+
 /** Evaluates the interpolated state and its derivative at t (into y, dy). */
 export interface DenseProbe {
   y: Float64Array;

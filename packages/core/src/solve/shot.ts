@@ -45,7 +45,7 @@ import {
 import type { PhaseRecord, ShotResult, Waveform, Warning } from '../model/result.js';
 import { DEFAULT_SOLVER, type Station } from '../model/station.js';
 import { brentZero } from './brent.js';
-import { ExtremumTracker, type DenseProbe, type Quantity } from './extrema.js';
+import { ExtremumTracker, LinearQuantity, type DenseProbe, type Quantity } from './extrema.js';
 import type { Integrator, StepView } from './integrator.js';
 import type { StiffOptions } from './stiff-integrator.js';
 import { chooseIntegrator, releaseIntegrator } from './choose-integrator.js';
@@ -131,6 +131,10 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const dI = 1e-6 * scales.current_A;
   const fieldQuantity = (p: number): Quantity => {
     const pr = net.probes[p];
+    if (!(nl && p === 0)) {
+      const idx = [IL, ...net.loops.map((_, k) => loopCurrentIndex(k))];
+      return new LinearQuantity(idx, [pr.coil_ApmPerA, ...pr.loops_ApmPerA]);
+    }
     const coilField = nl && p === 0 ? (i: number) => nl.fieldAtPart_Apm(i) : (i: number) => pr.coil_ApmPerA * i;
     const coilSlope = nl && p === 0 ? (i: number) => (nl.fieldAtPart_Apm(i + dI) - nl.fieldAtPart_Apm(i - dI)) / (2 * dI) : () => pr.coil_ApmPerA;
     return {
@@ -167,23 +171,12 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     rhs.eval(t + hJv, jvY, jvDy);
     return (e.slope(jvY, jvDy) - e.slope(y, dy)) / hJv;
   };
-  const coilTracker = new ExtremumTracker({ value: (yy) => yy[IL], slope: (_yy, d) => d[IL] }, probe, eventTol);
-  const switchTracker = new ExtremumTracker({ value: (yy) => yy[IS], slope: (_yy, d) => d[IS] }, probe, eventTol);
-  const diodeTracker = new ExtremumTracker(
-    { value: (yy) => yy[IL] - yy[IS], slope: (_yy, d) => d[IL] - d[IS] },
-    probe,
-    eventTol,
-  );
+  const coilTracker = new ExtremumTracker(new LinearQuantity([IL], [1]), probe, eventTol);
+  const switchTracker = new ExtremumTracker(new LinearQuantity([IS], [1]), probe, eventTol);
+  const diodeTracker = new ExtremumTracker(new LinearQuantity([IL, IS], [1, -1]), probe, eventTol);
   const didtTracker = new ExtremumTracker(switchDidt, probe, eventTol);
   const probeTrackers = net.probes.map((_, p) => new ExtremumTracker(fieldQuantity(p), probe, eventTol));
-  const loopTrackers = net.loops.map(
-    (_, k) =>
-      new ExtremumTracker(
-        { value: (yy) => yy[loopCurrentIndex(k)], slope: (_yy, d) => d[loopCurrentIndex(k)] },
-        probe,
-        eventTol,
-      ),
-  );
+  const loopTrackers = net.loops.map((_, k) => new ExtremumTracker(new LinearQuantity([loopCurrentIndex(k)], [1]), probe, eventTol));
   const trackers = [coilTracker, switchTracker, diodeTracker, didtTracker, ...probeTrackers, ...loopTrackers];
   let minCapV = net.voltage_V;
 
@@ -268,7 +261,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       hitT = bestT;
       hitStepT0 = s.t0;
       hitIndex = best;
-      for (const tr of trackers) tr.step(s.t0, bestT, hitY, hitDy);
+      for (let q = 0; q < trackers.length; q++) trackers[q].step(s.t0, bestT, hitY, hitDy);
       if (hitY[V] < minCapV) minCapV = hitY[V];
       coilCurve.push(s.t0, bestT, sampleCoil);
       return false;
@@ -278,7 +271,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       if (gBuf[e] > 0) armed[e] = true;
     }
     firstStep = false;
-    for (const tr of trackers) tr.step(s.t0, s.t1, s.y1, s.dy1);
+    for (let q = 0; q < trackers.length; q++) trackers[q].step(s.t0, s.t1, s.y1, s.dy1);
     if (s.y1[V] < minCapV) minCapV = s.y1[V];
     coilCurve.push(s.t0, s.t1, sampleCoil);
     prevY.set(s.y1);

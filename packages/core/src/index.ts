@@ -74,7 +74,7 @@ export { allowedSurgeCurrent_A, halfSineI2t_A2s, equivalentHalfSineDuration_s } 
 export { bleederTime_s } from './analysis/bleeder.js';
 export { penetrationFigures, penetrationText, skinDepth_m, PENETRATION_WARN } from './analysis/penetration.js';
 export type { PenetrationFigures, BodyPenetration, PenetrationOptions } from './analysis/penetration.js';
-export { runSweep, sizeBank, sizingTarget, runTolerance, solveVoltage, parseVarySpec, resolveVaryAxis, parseToleranceSpec, resolveTolerance, unitBuild, findRoot } from './explore/public.js';
+export { runSweep, sizeBank, sizingTarget, runTolerance, solveVoltage, parseVarySpec, resolveVaryAxis, parseToleranceSpec, resolveTolerance, unitBuild, findRoot, parseAxisValue } from './explore/public.js';
 export { sweepToCsv, sweepToJson, sweepToText, sweepMapInput, sizeToText, sizeToJson, toleranceToText, toleranceToJson, toleranceToCsv, toleranceHistogramInput, toleranceReportHtml } from './explore/public.js';
 export type { SweepAxis, SweepResult, SweepRow, RunOptions, SizeBankOptions, SizeResult, BankCandidate, CapacitorUnit, ToleranceOptions, ToleranceResult, ToleranceField, VoltageSolve, PointOutcome } from './explore/public.js';
 export { adiabaticFinalTemperature, adiabaticI2t } from './analysis/heating-iec60949.js';

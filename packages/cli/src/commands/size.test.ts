@@ -37,6 +37,13 @@ describe('fluxkick size', () => {
     expect(j.field_Apm).toBeLessThanOrEqual(j.targetField_Apm * (1 + 1e-5));
   });
 
+  it('reads a bare SI prefix of the capacitance unit (2.2m = 2.2 mF), as --vary does', async () => {
+    const a = JSON.parse((await run(['size', 'bench.yaml', '--capacitance', '2.2m', '--json'])).out) as { capacitance_F: number; voltage_V: number };
+    const b = JSON.parse((await run(['size', 'bench.yaml', '--capacitance', '2.2mF', '--json'])).out) as { capacitance_F: number; voltage_V: number };
+    expect(a.capacitance_F).toBeCloseTo(2.2e-3, 15);
+    expect(a.voltage_V).toBe(b.voltage_V);
+  });
+
   it('finds the least-energy bank from units and says what binds', async () => {
     const r = await run(['size', 'bench.yaml', '--threads', '0', '--capacitance', '0.3mF:1.2mF', '--unit', 'capacitance=470uF,voltage=450V,esr=20mohm,esl=40nH', '--max-series', '3']);
     expect(r.code).toBe(0);

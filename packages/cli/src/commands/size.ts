@@ -20,6 +20,7 @@ import {
   sizingTarget,
   sizeToJson,
   sizeToText,
+  parseAxisValue,
   solveVoltage,
   tryParseQuantity,
   type CapacitorUnit,
@@ -51,7 +52,8 @@ function optionError(option: string, value: unknown, problem: string, expected: 
 }
 
 function quantity(option: string, text: string, dimension: Dimension, expected: string): number {
-  const r = tryParseQuantity(text.trim(), dimension);
+  // Units ("2.2 mF") or a bare SI prefix of the field's own unit ("2.2m" = 2.2 mF), as in --vary.
+  const r = parseAxisValue(text, dimension);
   if (!r.ok) throw optionError(option, text, r.reason, expected);
   return r.value;
 }

@@ -14,6 +14,7 @@ export type { SizeBankOptions, SizeResult, BankCandidate, Binding } from './size
 export { unitBuild } from './unitBuild.js';
 export type { CapacitorUnit, UnitBuild } from './unitBuild.js';
 export { findRoot } from './findRoot.js';
+export { parseAxisValue } from './parseAxisValue.js';
 export type { PointOutcome, PointResult } from './evaluateDesign.js';
 export { sweepToCsv, sweepToJson, sweepToText, sweepMapInput } from './sweepOutput.js';
 export { sizeToText, sizeToJson, UNIT_BUILD_RULES } from './sizeOutput.js';

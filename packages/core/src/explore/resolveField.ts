@@ -18,13 +18,25 @@ export interface ResolvedField {
   current: number | undefined;
 }
 
+/**
+ * Short names for the fields a designer varies every day (the bank's), so that
+ * `--vary capacitance=1m:5m:9 --vary voltage=1k:3k:9` works as written in the design brief.
+ * Any other field takes its full dotted path.
+ */
+export const SHORT_FIELD_NAMES: Readonly<Record<string, string>> = {
+  capacitance: 'bank.capacitance',
+  voltage: 'bank.voltage',
+  esr: 'bank.esr',
+  esl: 'bank.esl',
+};
+
 export function resolveField(
   design: unknown,
   pathText: string,
   source: OptionSource,
   fieldInfo: (segments: readonly (string | number)[]) => DesignFieldInfo = designFieldInfo,
 ): ResolvedField {
-  const { path, value } = readDesignPath(design, pathText, source, (p) => fieldInfo(p.segments).known);
+  const { path, value } = readDesignPath(design, SHORT_FIELD_NAMES[pathText.trim()] ?? pathText, source, (p) => fieldInfo(p.segments).known);
   const info = fieldInfo(path.segments);
   const fail = (problem: string) => new InputError({ code: 'option.invalid', path: source.option, value: source.value, expected: source.expected, problem: `${JSON.stringify(source.value)}: ${problem}` });
   if (!info.known) throw fail(`${path.text} is in the design file but not a field of the design schema`);

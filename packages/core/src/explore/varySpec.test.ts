@@ -64,6 +64,14 @@ describe('resolveVaryAxis(spec, design)', () => {
     expect(resolveVaryAxis(parseVarySpec('coupled[0].resistance=0.1m:0.3m:3'), design).values).toEqual([1e-4, 2e-4, 3e-4]);
   });
 
+  it('takes the short names capacitance, voltage, esr and esl for the bank fields', () => {
+    const axis = resolveVaryAxis(parseVarySpec('capacitance=1m:3m:3'), design);
+    expect(axis.path.text).toBe('bank.capacitance');
+    expect(axis.values).toEqual([1e-3, 2e-3, 3e-3]);
+    expect(resolveVaryAxis(parseVarySpec('voltage=1k:3k:3'), design)).toMatchObject({ values: [1000, 2000, 3000], dimension: 'voltage' });
+    expect(resolveVaryAxis(parseVarySpec('esl=0.1u,0.2u'), design).path.text).toBe('bank.esl');
+  });
+
   it('rounds spaced values of a whole-number field and refuses fractions in a list', () => {
     const d = sizingDesign();
     expect(resolveVaryAxis(parseVarySpec('ratings.capacitor.units=1:4:7'), d).values).toEqual([1, 2, 3, 4]);

@@ -5,7 +5,8 @@
  *   PATH=log:start:stop:count      logarithmic (geometric) spacing, both ends included, ends > 0
  *   PATH=v1,v2,v3                  an explicit list, in the order given
  *
- * PATH is a dotted path into the design file (`bank.capacitance`, `coupled[0].resistance`).
+ * PATH is a dotted path into the design file (`bank.capacitance`, `coupled[0].resistance`), or one of
+ * the short names of explore/resolveField.ts SHORT_FIELD_NAMES (`capacitance`, `voltage`, `esr`, `esl`).
  * Values take units ("1.5 kV", "2.2mF"), bare SI prefixes ("1.5k", "2.2m") or plain numbers in
  * the design file's convention (SI, temperatures in °C); units are checked against the
  * field's dimension in the design schema.

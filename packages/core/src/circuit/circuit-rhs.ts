@@ -64,7 +64,10 @@ export class CircuitRhs {
   private readonly rLoop20: Float64Array;
   private readonly aLoop: Float64Array;
   private readonly t0Loop: Float64Array;
-  private readonly cthLoop: Float64Array;
+  /** 1/C_th,k of each loop, and 1/C_th of the coil and 1/C (multiplications in the hot path). */
+  private readonly invCthLoop: Float64Array;
+  private readonly invCthCoil: number;
+  private readonly invC: number;
   /** f(t, y) → dy for the current mode. */
   readonly eval: Rhs;
 
@@ -86,7 +89,9 @@ export class CircuitRhs {
     this.rLoop20 = Float64Array.from(net.loops, (l) => l.resistance20_Ohm);
     this.aLoop = Float64Array.from(net.loops, (l) => l.tempCoeff_perK);
     this.t0Loop = Float64Array.from(net.loops, (l) => l.initialTemperature_C);
-    this.cthLoop = Float64Array.from(net.loops, (l) => l.heatCapacity_JpK);
+    this.invCthLoop = Float64Array.from(net.loops, (l) => 1 / l.heatCapacity_JpK);
+    this.invCthCoil = 1 / net.coil.heatCapacity_JpK;
+    this.invC = 1 / net.capacitance_F;
     this.eval = (t, y, dy) => this.evaluate(y, dy);
   }
 
@@ -224,7 +229,7 @@ export class CircuitRhs {
       const th = y[LOOP0 + n + k];
       const rk = this.rLoop20[k] * (1 + this.aLoop[k] * (this.t0Loop[k] + th - 20));
       b[off + k] = -rk * ik;
-      dy[LOOP0 + n + k] = (ik * ik * rk) / this.cthLoop[k];
+      dy[LOOP0 + n + k] = ik * ik * rk * this.invCthLoop[k];
     }
     // x = M⁻¹·b, into col
     const x = this.col;
@@ -244,7 +249,7 @@ export class CircuitRhs {
         x[i] = s;
       }
     }
-    dy[V] = -is / net.capacitance_F;
+    dy[V] = -is * this.invC;
     switch (kind) {
       case 'series':
         dy[IS] = x[0];
@@ -263,7 +268,7 @@ export class CircuitRhs {
         dy[IL] = 0;
     }
     for (let k = 0; k < n; k++) dy[LOOP0 + k] = x[off + k];
-    dy[TH_COIL] = (iL * iL * rc) / net.coil.heatCapacity_JpK;
+    dy[TH_COIL] = iL * iL * rc * this.invCthCoil;
     const acc = this.accBase;
     dy[acc + ACC_ESR] = net.esr_Ohm * is * is;
     dy[acc + ACC_SW] = vsw * is;

@@ -65,6 +65,38 @@ export function luSolve(lu: Float64Array, m: number, piv: Int32Array, b: Float64
   }
 }
 
+/**
+ * Reciprocals of U's diagonal (after luFactor), for luSolveRecip: a solve repeated many times with
+ * one factorization then multiplies instead of dividing.
+ */
+export function luDiagRecip(lu: Float64Array, m: number, rdiag: Float64Array): void {
+  for (let k = 0; k < m; k++) rdiag[k] = 1 / lu[k * m + k];
+}
+
+/** luSolve with the reciprocal diagonal from luDiagRecip. */
+export function luSolveRecip(lu: Float64Array, m: number, piv: Int32Array, rdiag: Float64Array, b: Float64Array): void {
+  for (let k = 0; k < m; k++) {
+    const p = piv[k];
+    if (p !== k) {
+      const t = b[k];
+      b[k] = b[p];
+      b[p] = t;
+    }
+  }
+  for (let i = 1; i < m; i++) {
+    let s = b[i];
+    const row = i * m;
+    for (let j = 0; j < i; j++) s -= lu[row + j] * b[j];
+    b[i] = s;
+  }
+  for (let i = m - 1; i >= 0; i--) {
+    let s = b[i];
+    const row = i * m;
+    for (let j = i + 1; j < m; j++) s -= lu[row + j] * b[j];
+    b[i] = s * rdiag[i];
+  }
+}
+
 /** Inverse of a (m×m) into inv, using work (m×m) and piv (m). Returns false if singular. */
 export function invert(a: Float64Array, m: number, inv: Float64Array, work: Float64Array, piv: Int32Array, col: Float64Array): boolean {
   work.set(a.subarray(0, m * m));

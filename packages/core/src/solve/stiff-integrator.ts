@@ -33,7 +33,7 @@
  * Why: eddy-current shells of a conductive part have time constants of microseconds against a
  * pulse of milliseconds; an explicit method must then take microsecond steps for the whole shot.
  */
-import { luFactor, luSolve, invert } from '../circuit/small-lu.js';
+import { luDiagRecip, luFactor, luSolveRecip, invert } from '../circuit/small-lu.js';
 import type { IntegrateOptions, IntegrateResult, Integrator, Rhs, StepObserver, StepView } from './integrator.js';
 
 const KM = 8;
@@ -49,9 +49,9 @@ const JAC_AGE = 10;
 
 /** Step numbers n_j = 2j (1-based). */
 const NJ = Float64Array.from({ length: KM + 2 }, (_, j) => 2 * j);
-/** Aitken–Neville factors n_j/n_{l−1} − 1 (extrapolation in h). */
-const EXTRAP = new Float64Array((KM + 2) * (KM + 2));
-for (let j = 2; j <= KM + 1; j++) for (let l = 2; l <= j; l++) EXTRAP[j * (KM + 2) + l] = NJ[j] / NJ[l - 1] - 1;
+/** Reciprocal Aitken–Neville factors 1/(n_j/n_{l−1} − 1) (extrapolation in h). */
+const EXTRAP_INV = new Float64Array((KM + 2) * (KM + 2));
+for (let j = 2; j <= KM + 1; j++) for (let l = 2; l <= j; l++) EXTRAP_INV[j * (KM + 2) + l] = 1 / (NJ[j] / NJ[l - 1] - 1);
 
 /**
  * Quartic Hermite basis on [0, 1]: HERMITE[r·5 + c] is the coefficient of θ^r of the basis
@@ -99,6 +99,8 @@ export class StiffIntegrator implements Integrator {
   private jac!: Float64Array;
   private lu!: Float64Array;
   private piv!: Int32Array;
+  /** 1/U_kk of the current line's factorization. */
+  private rdiag!: Float64Array;
   private rhsv!: Float64Array;
   private poly!: Float64Array;
   /** Slope at the start of the current step (f at the first, then the previous end slope). */
@@ -158,6 +160,7 @@ export class StiffIntegrator implements Integrator {
     this.jac = new Float64Array(m * m);
     this.lu = new Float64Array(m * m);
     this.piv = new Int32Array(m);
+    this.rdiag = new Float64Array(m);
     this.rhsv = new Float64Array(m);
     this.poly = new Float64Array(5 * n);
     this.s0 = mk();
@@ -192,13 +195,14 @@ export class StiffIntegrator implements Integrator {
 
   /** Line j of the extrapolation table; false if the substeps failed (singular or non-finite). */
   private line(j: number): boolean {
-    const { n, m, imp, expl, y, yk, fk, f0, jac, lu, piv, rhsv, d1, mid, t } = this;
+    const { n, m, imp, expl, y, yk, fk, f0, jac, lu, piv, rdiag, rhsv, d1, mid, t } = this;
     const x = this.x;
     const hj = this.h / NJ[j];
     for (let r = 0; r < m; r++) {
       for (let c = 0; c < m; c++) lu[r * m + c] = (r === c ? 1 : 0) - hj * jac[r * m + c];
     }
     if (!luFactor(lu, m, piv)) return false;
+    luDiagRecip(lu, m, rdiag);
     for (let i = 0; i < n; i++) yk[i] = y[i];
     const nj = NJ[j];
     const half = nj / 2;
@@ -210,7 +214,7 @@ export class StiffIntegrator implements Integrator {
         this.nEval++;
       }
       for (let r = 0; r < m; r++) rhsv[r] = hj * fs[imp[r]];
-      luSolve(lu, m, piv, rhsv);
+      luSolveRecip(lu, m, piv, rdiag, rhsv);
       // the substep's increment: explicit Euler, the implicit components from the solve
       for (let e = 0; e < expl.length; e++) yk[expl[e]] += hj * fs[expl[e]];
       for (let r = 0; r < m; r++) yk[imp[r]] += rhsv[r];
@@ -234,10 +238,10 @@ export class StiffIntegrator implements Integrator {
     const { n, t, scal, y, aTol, hh, w, aw } = this;
     const rTol = this.rTol;
     for (let l = j; l > 1; --l) {
-      const fac = EXTRAP[j * (KM + 2) + l];
+      const rfac = EXTRAP_INV[j * (KM + 2) + l];
       const tl = t[l];
       const tl1 = t[l - 1];
-      for (let i = 0; i < n; i++) tl1[i] = tl[i] + (tl[i] - tl1[i]) / fac;
+      for (let i = 0; i < n; i++) tl1[i] = tl[i] + (tl[i] - tl1[i]) * rfac;
     }
     let err = 0;
     const t1 = t[1];
@@ -388,10 +392,10 @@ export class StiffIntegrator implements Integrator {
         const tab = q === 0 ? mid : d1;
         for (let j = 2; j <= kc; j++) {
           for (let l = j; l > 1; --l) {
-            const fac = EXTRAP[j * (KM + 2) + l];
+            const rfac = EXTRAP_INV[j * (KM + 2) + l];
             const ml = tab[l];
             const ml1 = tab[l - 1];
-            for (let i = 0; i < nd; i++) ml1[i] = ml[i] + (ml[i] - ml1[i]) / fac;
+            for (let i = 0; i < nd; i++) ml1[i] = ml[i] + (ml[i] - ml1[i]) * rfac;
           }
         }
       }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { invert, luFactor, luSolve } from './small-lu.js';
+import { invert, luDiagRecip, luFactor, luSolve, luSolveRecip } from './small-lu.js';
 
 describe('luFactor / luSolve', () => {
   it('solves a 3×3 system that needs a row swap (exact answer by construction)', () => {
@@ -9,6 +9,18 @@ describe('luFactor / luSolve', () => {
     const piv = new Int32Array(3);
     expect(luFactor(a, 3, piv)).toBe(true);
     luSolve(a, 3, piv, b);
+    expect(Array.from(b).map((v) => Math.round(v * 1e12) / 1e12)).toEqual([1, -2, 3]);
+  });
+
+  it('luSolveRecip (reciprocal pivots) solves the same row-swapped 3×3 system (exact answer by construction)', () => {
+    const a = Float64Array.from([0, 2, 1, 1, 1, 1, 2, 0, 3]);
+    const b = Float64Array.from([0 * 1 + 2 * -2 + 1 * 3, 1 - 2 + 3, 2 * 1 + 0 + 3 * 3]);
+    const piv = new Int32Array(3);
+    const rdiag = new Float64Array(3);
+    expect(luFactor(a, 3, piv)).toBe(true);
+    luDiagRecip(a, 3, rdiag);
+    luSolveRecip(a, 3, piv, rdiag, b);
+    // one rounding per pivot more or less than luSolve: agree with the exact x to 1e-12
     expect(Array.from(b).map((v) => Math.round(v * 1e12) / 1e12)).toEqual([1, -2, 3]);
   });
 

@@ -374,7 +374,8 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
             hitY.set(s.y1);
             return true;
           },
-          { ...intOpts, initialStep: hitT - hitStepT0 },
+          // only the end state is wanted: no dense output, so no dense-output error control either
+          { ...intOpts, initialStep: hitT - hitStepT0, denseEager: [] },
         );
         evaluations += r2.evaluations;
       }

@@ -26,7 +26,8 @@
  * consistent at the diode-on event where i_d = 0). If (R_s + r_T + r_F)·C is below
  * `instantCommutation_s` the commutation is instantaneous: setMode reports the mode as singular.
  */
-import type { Rhs } from '../solve/integrator.js';
+/** A right-hand side dy/dt = f(t, y), written into dy (no allocation); the integrators of solve/ take this. */
+export type Rhs = (t: number, y: Float64Array, dy: Float64Array) => void;
 import { modeKind, type Mode, type ModeKind } from './modes.js';
 import type { Network } from './network.js';
 import { luFactor, luSolve, invert } from './small-lu.js';

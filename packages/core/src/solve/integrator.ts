@@ -13,8 +13,8 @@
  * locate level crossings after the shot, without keeping every step's interpolant in memory.
  */
 
-/** Right-hand side: writes f(t, y) into dy. Must not keep references to y or dy. */
-export type Rhs = (t: number, y: Float64Array, dy: Float64Array) => void;
+import type { Rhs } from '../circuit/circuit-rhs.js';
+export type { Rhs };
 
 export interface StepView {
   t0: number;

@@ -17,11 +17,11 @@
  * 5. Waveform samples (uniform grid plus every event) and the pulse-width level crossings are
  *    read afterwards by replaying the logged steps (solve/step-log.ts) on the dense output.
  *
- * Energy balance (analysis/energy.ts) is checked on every shot; numerical trouble becomes a
+ * Energy balance (solve/energy-balance.ts) is checked on every shot; numerical trouble becomes a
  * Warning in the result, never a throw.
  */
-import { energyBalance, ENERGY_BALANCE_WARN } from '../analysis/energy.js';
-import { assembleFigures, widthAtLevel } from '../analysis/figures.js';
+import { energyBalance, ENERGY_BALANCE_WARN } from './energy-balance.js';
+import { assembleFigures, widthAtLevel } from './shot-figures.js';
 import { CircuitRhs } from '../circuit/circuit-rhs.js';
 import { modeAfterEvent, modeEvents, violatedAtStart, DECAY_FRACTION, type ModeEvent } from '../circuit/mode-events.js';
 import { modeKind, phaseName, type Mode } from '../circuit/modes.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MU0, assembleFigures, widthAtLevel } from './figures.js';
+import { MU0, assembleFigures, widthAtLevel } from './shot-figures.js';
 
 describe('widthAtLevel(peak, fraction, crossing, tEnd)', () => {
   // i(t) = sin(πt) on [0, 1] (closed form): crosses level a at asin(a)/π and 1 − asin(a)/π

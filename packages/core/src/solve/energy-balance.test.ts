@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { energyBalance } from './energy.js';
+import { energyBalance } from './energy-balance.js';
 
 describe('energyBalance(terms)', () => {
   const terms = {

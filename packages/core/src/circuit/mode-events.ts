@@ -38,42 +38,60 @@ export const SWITCH_HYSTERESIS = 1e-9;
 /** Relative threshold of the `decayed` end condition (fraction of the stored energy). */
 export const DECAY_FRACTION = 1e-12;
 
+/**
+ * One event of a mode. A class with the event's constants in fields rather than a pair of closures
+ * per event: modeEvents runs at every phase of every shot, and closures cost an allocation each
+ * (and a name property under tsx's keep-names), which showed in sweeps of short shots.
+ */
+class CircuitEvent implements ModeEvent {
+  constructor(
+    readonly reason: EventReason,
+    readonly current: boolean,
+    private readonly rhs: CircuitRhs,
+    /** switch-off: the switch direction (±1); decayed: 1 if the capacitor's energy counts, else 0. */
+    private readonly sw: number,
+    /** diode-on: V_F0; switch-on: V_T0 + hysteresis; decayed: the energy threshold. */
+    private readonly level: number,
+    /** decayed: ½C. */
+    private readonly halfC: number,
+  ) {}
+
+  g(y: Float64Array, dy: Float64Array): number {
+    switch (this.reason) {
+      case 'switch-off':
+        return this.sw * y[IS];
+      case 'diode-off':
+        return y[IL] - y[IS];
+      case 'diode-on':
+        return this.rhs.nodeVoltage(y, dy) + this.level;
+      case 'switch-on':
+        return this.level - Math.abs(this.rhs.switchVoltage(y, dy));
+      default:
+        return this.rhs.magneticEnergy(y) + (this.sw !== 0 ? this.halfC * y[V] * y[V] : 0) - this.level;
+    }
+  }
+
+  /** Meaningful for the current events only (callers check `current` first). */
+  slope(_y: Float64Array, dy: Float64Array): number {
+    return this.reason === 'switch-off' ? this.sw * dy[IS] : dy[IL] - dy[IS];
+  }
+}
+
 export function modeEvents(rhs: CircuitRhs, mode: Mode): ModeEvent[] {
   const net = rhs.net;
   const out: ModeEvent[] = [];
   const sw = mode.sw;
-  if (sw !== 0) {
-    out.push({ reason: 'switch-off', current: true, g: (y) => sw * y[IS], slope: (_y, dy) => sw * dy[IS] });
-  }
+  if (sw !== 0) out.push(new CircuitEvent('switch-off', true, rhs, sw, 0, 0));
   if (net.diode) {
-    if (mode.diode) {
-      out.push({
-        reason: 'diode-off',
-        current: true,
-        g: (y) => y[IL] - y[IS],
-        slope: (_y, dy) => dy[IL] - dy[IS],
-      });
-    } else if (sw !== 0 || rhs.nLoops > 0) {
-      const vF0 = net.diode.vF0_V;
-      out.push({ reason: 'diode-on', current: false, g: (y, dy) => rhs.nodeVoltage(y, dy) + vF0 });
-    }
+    if (mode.diode) out.push(new CircuitEvent('diode-off', true, rhs, 0, 0, 0));
+    else if (sw !== 0 || rhs.nLoops > 0) out.push(new CircuitEvent('diode-on', false, rhs, 0, net.diode.vF0_V, 0));
   }
   if (sw === 0 && net.switchKind === 'bidirectional') {
     const hysteresis = SWITCH_HYSTERESIS * net.voltage_V;
-    const vT0 = net.vT0_V;
-    out.push({
-      reason: 'switch-on',
-      current: false,
-      g: (y, dy) => vT0 + hysteresis - Math.abs(rhs.switchVoltage(y, dy)),
-    });
+    out.push(new CircuitEvent('switch-on', false, rhs, 0, net.vT0_V + hysteresis, 0));
   }
   const threshold = DECAY_FRACTION * net.storedEnergy_J;
-  const halfC = 0.5 * net.capacitance_F;
-  out.push({
-    reason: 'decayed',
-    current: false,
-    g: (y) => rhs.magneticEnergy(y) + (sw !== 0 ? halfC * y[V] * y[V] : 0) - threshold,
-  });
+  out.push(new CircuitEvent('decayed', false, rhs, sw !== 0 ? 1 : 0, threshold, 0.5 * net.capacitance_F));
   return out;
 }
 

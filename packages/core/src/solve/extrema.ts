@@ -55,18 +55,15 @@ export class ExtremumTracker {
   /** Time of the largest |q|, s. */
   time = 0;
   private slopePrev = 0;
-  private readonly slopeAt: (t: number) => number;
+  /** q's slope on the dense output, for Brent's method; made at the first bracketed extremum only
+   * (many shots' trackers never need it, and a sweep builds trackers for every shot). */
+  private slopeAt: ((t: number) => number) | null = null;
 
   constructor(
     readonly q: Quantity,
     private readonly probe: DenseProbe,
     private readonly tol: number,
-  ) {
-    this.slopeAt = (t: number) => {
-      this.probe.at(t);
-      return this.q.slope(this.probe.y, this.probe.dy);
-    };
-  }
+  ) {}
 
   private consider(v: number, t: number): void {
     const a = Math.abs(v);
@@ -88,6 +85,10 @@ export class ExtremumTracker {
     const sb = this.q.slope(yb, dyb);
     const sa = this.slopePrev;
     if ((sa > 0 && sb < 0) || (sa < 0 && sb > 0)) {
+      this.slopeAt ??= (t: number) => {
+        this.probe.at(t);
+        return this.q.slope(this.probe.y, this.probe.dy);
+      };
       const tr = brentZero(this.slopeAt, ta, tb, sa, sb, this.tol);
       this.probe.at(tr);
       this.consider(this.q.value(this.probe.y, this.probe.dy), tr);

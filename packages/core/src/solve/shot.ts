@@ -79,6 +79,41 @@ function releaseWorkspace(w: Workspace): void {
   freeWorkspaces.push(w);
 }
 
+/** [i_L, loop currents...]: the state indices of the coil and loop currents. */
+function coilAndLoopCurrents(nLoops: number): number[] {
+  const idx = [IL];
+  for (let k = 0; k < nLoops; k++) idx.push(loopCurrentIndex(k));
+  return idx;
+}
+
+/**
+ * d²i_s/dt² by a directional difference of f along f (exact for the linear part of f); its value is
+ * di_s/dt. A class rather than an object of closures made per shot (sweeps run thousands of short
+ * shots, and the set-up counts); jvY, jvDy are scratch arrays of the state size.
+ */
+class SwitchDidt implements Quantity {
+  constructor(
+    private readonly rhs: CircuitRhs,
+    private readonly jvY: Float64Array,
+    private readonly jvDy: Float64Array,
+    private readonly h_s: number,
+  ) {}
+
+  value(_yy: Float64Array, d: Float64Array): number {
+    return d[IS];
+  }
+
+  slope(yy: Float64Array, d: Float64Array): number {
+    if (this.rhs.mode.sw === 0) return 0;
+    const n = this.rhs.size;
+    for (let i = 0; i < n; i++) this.jvY[i] = yy[i] + this.h_s * d[i];
+    this.rhs.eval(0, this.jvY, this.jvDy);
+    return (this.jvDy[IS] - d[IS]) / this.h_s;
+  }
+}
+
+const NO_COMPONENTS: number[] = [];
+
 type EndReason = 'current-zero' | 'decayed' | 't-max' | 'step-limit' | 'step-too-small' | 'chattering';
 
 export function simulateShot(station: Station, options: SimulateOptions = {}): ShotResult {
@@ -101,9 +136,9 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     denseCount: dynamicCount(nLoops),
     // dense output built at every step (and error-controlled) for the coil and loop currents;
     // the other components only when an event or a peak is bracketed
-    denseEager: [IL, ...net.loops.map((_, k) => loopCurrentIndex(k))],
+    denseEager: coilAndLoopCurrents(nLoops),
     // the stiff integrator solves the electrical states implicitly, the rest explicitly
-    implicit: [V, IS, IL, ...net.loops.map((_, k) => loopCurrentIndex(k))],
+    implicit: [V, IS, ...coilAndLoopCurrents(nLoops)],
   };
   const eventTol = settings.eventTol_s;
   const tMax = settings.tMax_s;
@@ -132,8 +167,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const fieldQuantity = (p: number): Quantity => {
     const pr = net.probes[p];
     if (!(nl && p === 0)) {
-      const idx = [IL, ...net.loops.map((_, k) => loopCurrentIndex(k))];
-      return new LinearQuantity(idx, [pr.coil_ApmPerA, ...pr.loops_ApmPerA]);
+      return new LinearQuantity(coilAndLoopCurrents(nLoops), [pr.coil_ApmPerA, ...pr.loops_ApmPerA]);
     }
     const coilField = nl && p === 0 ? (i: number) => nl.fieldAtPart_Apm(i) : (i: number) => pr.coil_ApmPerA * i;
     const coilSlope = nl && p === 0 ? (i: number) => (nl.fieldAtPart_Apm(i + dI) - nl.fieldAtPart_Apm(i - dI)) / (2 * dI) : () => pr.coil_ApmPerA;
@@ -150,19 +184,10 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
       },
     };
   };
-  // d²i_s/dt² by a directional difference of f along f (exact for the linear part of f)
   const jvY = ws.a[5];
   const jvDy = ws.a[6];
   const hJv = 1e-6 * scales.time_s;
-  const switchDidt: Quantity = {
-    value: (_yy, d) => d[IS],
-    slope(yy, d) {
-      if (rhs.mode.sw === 0) return 0;
-      for (let i = 0; i < N; i++) jvY[i] = yy[i] + hJv * d[i];
-      rhs.eval(0, jvY, jvDy);
-      return (jvDy[IS] - d[IS]) / hJv;
-    },
-  };
+  const switchDidt = new SwitchDidt(rhs, jvY, jvDy, hJv);
   // slope of a current event along the solution a short time ahead, for grazing starts
   const slopeTol = 1e-9 * (scales.current_A / scales.time_s);
   const curvature = (e: ModeEvent): number => {
@@ -327,13 +352,15 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     phases.push({ name: phaseName(mode), start_s: t, end_s: t, endReason: '' });
     phaseModes.push(mode);
     if (gPrev.length < events.length) gPrev = new Float64Array(events.length);
-    armed = events.map((e, i) => {
-      const g0 = e.g(y, dy);
+    armed.length = events.length;
+    let decayedAt = -1;
+    for (let i = 0; i < events.length; i++) {
+      const g0 = events[i].g(y, dy);
       gPrev[i] = g0;
-      return g0 > 0;
-    });
+      armed[i] = g0 > 0;
+      if (decayedAt < 0 && events[i].reason === 'decayed') decayedAt = i;
+    }
     // nothing left to decay at the start of this phase (e.g. loops without current): the shot ends
-    const decayedAt = events.findIndex((e) => e.reason === 'decayed');
     if (decayedAt >= 0 && !armed[decayedAt]) {
       phases.pop();
       phaseModes.pop();
@@ -375,7 +402,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
             return true;
           },
           // only the end state is wanted: no dense output, so no dense-output error control either
-          { ...intOpts, initialStep: hitT - hitStepT0, denseEager: [] },
+          { ...intOpts, initialStep: hitT - hitStepT0, denseEager: NO_COMPONENTS },
         );
         evaluations += r2.evaluations;
       }
@@ -446,32 +473,6 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     });
   }
 
-  // ---- replay of logged steps -------------------------------------------------------------------
-  let replayMode = -1;
-  const replayY0 = new Float64Array(N);
-  const replay = (k: number, onStep: (s: StepView) => void): void => {
-    const ph = log.phase[k];
-    if (ph !== replayMode) {
-      rhs.setMode(phaseModes[ph]);
-      replayMode = ph;
-    }
-    replayY0.set(log.startState(k));
-    const t0 = log.t0[k];
-    const t1 = log.t1[k];
-    integrator.integrate(
-      rhs.eval,
-      t0,
-      replayY0,
-      t1,
-      (s) => {
-        onStep(s);
-        return true;
-      },
-      { ...intOpts, initialStep: t1 - t0 },
-    );
-  };
-  const stepEnd = (k: number): number => (k + 1 < log.count ? log.t0[k + 1] : tEnd);
-
   // ---- pulse widths by level crossings of the coil current -------------------------------------
   const sgn = coilTracker.valueAtMax < 0 ? -1 : 1;
   const tPk = coilTracker.time;
@@ -501,8 +502,37 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
     });
   }
 
-  // ---- waveform ---------------------------------------------------------------------------------
-  const waveform = sampleWaveform(settings.samples, tEnd, y, phases, log, stepEnd, replay, net, N);
+  // ---- waveform, by replaying the logged steps (only when samples are asked for) ------------------
+  let waveform: Waveform;
+  if (keepLog) {
+    let replayMode = -1;
+    const replayY0 = new Float64Array(N);
+    const replay = (k: number, onStep: (s: StepView) => void): void => {
+      const ph = log.phase[k];
+      if (ph !== replayMode) {
+        rhs.setMode(phaseModes[ph]);
+        replayMode = ph;
+      }
+      replayY0.set(log.startState(k));
+      const t0 = log.t0[k];
+      const t1 = log.t1[k];
+      integrator.integrate(
+        rhs.eval,
+        t0,
+        replayY0,
+        t1,
+        (s) => {
+          onStep(s);
+          return true;
+        },
+        { ...intOpts, initialStep: t1 - t0 },
+      );
+    };
+    const stepEnd = (k: number): number => (k + 1 < log.count ? log.t0[k + 1] : tEnd);
+    waveform = sampleWaveform(settings.samples, tEnd, y, phases, log, stepEnd, replay, net, N);
+  } else {
+    waveform = emptyWaveform(net);
+  }
 
   const { figures, nonFinite } = assembleFigures({
     peakCurrent_A: coilTracker.valueAtMax,
@@ -566,6 +596,21 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   };
 }
 
+/** A waveform with no samples (one empty series per loop and probe). */
+function emptyWaveform(net: ReturnType<typeof buildNetwork>): Waveform {
+  return {
+    t_s: [],
+    capacitorVoltage_V: [],
+    coilCurrent_A: [],
+    switchCurrent_A: [],
+    diodeCurrent_A: [],
+    loopCurrents_A: net.loops.map(() => []),
+    field_Apm: net.probes.map(() => []),
+    coilTemperature_C: [],
+    loopTemperatures_C: net.loops.map(() => []),
+  };
+}
+
 /**
  * Waveform on a uniform grid of `samples` points over [0, t_end] plus every phase boundary,
  * read from the dense output of the replayed steps.
@@ -582,17 +627,7 @@ function sampleWaveform(
   N: number,
 ): Waveform {
   const nLoops = net.loops.length;
-  const wf: Waveform = {
-    t_s: [],
-    capacitorVoltage_V: [],
-    coilCurrent_A: [],
-    switchCurrent_A: [],
-    diodeCurrent_A: [],
-    loopCurrents_A: net.loops.map(() => []),
-    field_Apm: net.probes.map(() => []),
-    coilTemperature_C: [],
-    loopTemperatures_C: net.loops.map(() => []),
-  };
+  const wf = emptyWaveform(net);
   if (!(samples > 0)) return wf;
   const times: number[] = [];
   if (samples === 1) times.push(tEnd);

@@ -34,7 +34,8 @@ import { luFactor, luSolve, invert } from './small-lu.js';
 import { ACC_CABLE, ACC_DIODE, ACC_ESR, ACC_I2T_D, ACC_I2T_SW, ACC_SW, IL, IS, LOOP0, TH_COIL, V, dynamicCount, stateSize } from './state.js';
 
 export class CircuitRhs {
-  readonly net: Network;
+  /** The network (changed only by `rebind`). */
+  net: Network;
   readonly nLoops: number;
   readonly size: number;
   /** Index of the first integral (E_esr) in the state. */
@@ -60,15 +61,15 @@ export class CircuitRhs {
   private readonly piv: Int32Array;
   private readonly b: Float64Array;
   private readonly col: Float64Array;
-  private readonly nonlinear: boolean;
+  private nonlinear: boolean;
   private readonly mLoop: Float64Array;
   private readonly rLoop20: Float64Array;
   private readonly aLoop: Float64Array;
   private readonly t0Loop: Float64Array;
   /** 1/C_th,k of each loop, and 1/C_th of the coil and 1/C (multiplications in the hot path). */
   private readonly invCthLoop: Float64Array;
-  private readonly invCthCoil: number;
-  private readonly invC: number;
+  private invCthCoil: number;
+  private invC: number;
   /** f(t, y) → dy for the current mode. */
   readonly eval: Rhs;
 
@@ -85,15 +86,51 @@ export class CircuitRhs {
     this.piv = new Int32Array(mMax);
     this.b = new Float64Array(mMax);
     this.col = new Float64Array(mMax);
+    this.mLoop = new Float64Array(n);
+    this.rLoop20 = new Float64Array(n);
+    this.aLoop = new Float64Array(n);
+    this.t0Loop = new Float64Array(n);
+    this.invCthLoop = new Float64Array(n);
+    this.nonlinear = false;
+    this.invCthCoil = 0;
+    this.invC = 0;
+    this.rebind(net);
+    this.eval = (t, y, dy) => this.evaluate(y, dy);
+  }
+
+  /**
+   * Take another network with the same number of loops, as if newly constructed (same buffers, no
+   * allocation: the engine keeps one CircuitRhs per state size between shots, since a sweep runs
+   * thousands of short shots and typed-array allocation is a good part of their set-up).
+   */
+  rebind(net: Network): void {
+    const n = this.nLoops;
+    if (net.loops.length !== n) throw new Error(`CircuitRhs.rebind: ${net.loops.length} loops, expected ${n}`);
+    this.net = net;
+    this.mode = { sw: 1, diode: false };
+    this.kind = 'series';
+    this.m = 0;
+    this.coilRow = -1;
+    this.loopOff = 0;
+    this.algebraicSource = false;
+    this.instantCommutation_s = 0;
+    this.mat.fill(0);
+    this.minv.fill(0);
+    this.work.fill(0);
+    this.piv.fill(0);
+    this.b.fill(0);
+    this.col.fill(0);
     this.nonlinear = net.coil.nonlinear !== null;
-    this.mLoop = Float64Array.from(net.loops, (l) => l.mutualToCoil_H);
-    this.rLoop20 = Float64Array.from(net.loops, (l) => l.resistance20_Ohm);
-    this.aLoop = Float64Array.from(net.loops, (l) => l.tempCoeff_perK);
-    this.t0Loop = Float64Array.from(net.loops, (l) => l.initialTemperature_C);
-    this.invCthLoop = Float64Array.from(net.loops, (l) => 1 / l.heatCapacity_JpK);
+    for (let k = 0; k < n; k++) {
+      const l = net.loops[k];
+      this.mLoop[k] = l.mutualToCoil_H;
+      this.rLoop20[k] = l.resistance20_Ohm;
+      this.aLoop[k] = l.tempCoeff_perK;
+      this.t0Loop[k] = l.initialTemperature_C;
+      this.invCthLoop[k] = 1 / l.heatCapacity_JpK;
+    }
     this.invCthCoil = 1 / net.coil.heatCapacity_JpK;
     this.invC = 1 / net.capacitance_F;
-    this.eval = (t, y, dy) => this.evaluate(y, dy);
   }
 
   /** Load-mesh self inductance L_LL at coil current i (incremental for a nonlinear coil), H. */

@@ -137,8 +137,18 @@ export function buildNetwork(station: Station): Network {
     probes: station.probes.map((p) => ({
       name: p.name,
       coil_ApmPerA: p.coil_ApmPerA,
-      loops_ApmPerA: Float64Array.from({ length: n }, (_, k) => p.loops_ApmPerA[k] ?? 0),
+      loops_ApmPerA: loopFields(p.loops_ApmPerA, n),
     })),
     storedEnergy_J: 0.5 * C * V0 * V0,
   };
+}
+
+/**
+ * The first n loop field factors, missing ones 0. A plain loop: Float64Array.from with a mapping
+ * function takes a slow generic path that showed in sweeps of short shots.
+ */
+function loopFields(f: readonly number[], n: number): Float64Array {
+  const out = new Float64Array(n);
+  for (let k = 0; k < n; k++) out[k] = f[k] ?? 0;
+  return out;
 }

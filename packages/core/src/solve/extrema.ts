@@ -23,8 +23,9 @@ export class LinearQuantity implements Quantity {
   private readonly w: Float64Array;
 
   constructor(indices: ArrayLike<number>, weights: ArrayLike<number>) {
-    this.idx = Int32Array.from(indices);
-    this.w = Float64Array.from(weights);
+    // the constructors copy an array-like directly (TypedArray.from takes a slower generic path)
+    this.idx = new Int32Array(indices);
+    this.w = new Float64Array(weights);
   }
 
   value(y: Float64Array): number {

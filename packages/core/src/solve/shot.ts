@@ -25,7 +25,7 @@ import { assembleFigures, widthAtLevel } from './shot-figures.js';
 import { CircuitRhs } from '../circuit/circuit-rhs.js';
 import { modeAfterEvent, modeEvents, violatedAtStart, DECAY_FRACTION, type ModeEvent } from '../circuit/mode-events.js';
 import { modeKind, phaseName, type Mode } from '../circuit/modes.js';
-import { buildNetwork } from '../circuit/network.js';
+import { buildNetwork, type Network } from '../circuit/network.js';
 import {
   ACC_CABLE,
   ACC_DIODE,
@@ -41,6 +41,7 @@ import {
   dynamicCount,
   loopCurrentIndex,
   loopThetaIndex,
+  stateSize,
 } from '../circuit/state.js';
 import type { PhaseRecord, ShotResult, Waveform, Warning } from '../model/result.js';
 import { DEFAULT_SOLVER, type Station } from '../model/station.js';
@@ -67,12 +68,33 @@ interface Workspace {
   n: number;
   a: Float64Array[];
   curve: CurveLog;
+  /** The right-hand side, rebound to each shot's network (same loop count, as n = stateSize(loops)). */
+  rhs: CircuitRhs;
+  /** Step log (reset per shot; grows as needed). */
+  log: StepLog;
+  /** Event values at the previous step end and at this one (a mode has at most 4 events). */
+  gPrev: Float64Array;
+  gBuf: Float64Array;
 }
 const freeWorkspaces: Workspace[] = [];
-function acquireWorkspace(n: number): Workspace {
+function acquireWorkspace(net: Network): Workspace {
+  const n = stateSize(net.loops.length);
   const i = freeWorkspaces.findIndex((w) => w.n === n);
-  if (i >= 0) return freeWorkspaces.splice(i, 1)[0];
-  return { n, a: Array.from({ length: 11 }, () => new Float64Array(n)), curve: new CurveLog() };
+  if (i >= 0) {
+    const w = freeWorkspaces.splice(i, 1)[0];
+    w.rhs.rebind(net);
+    w.log.count = 0;
+    return w;
+  }
+  return {
+    n,
+    a: Array.from({ length: 11 }, () => new Float64Array(n)),
+    curve: new CurveLog(),
+    rhs: new CircuitRhs(net),
+    log: new StepLog(n, 64),
+    gPrev: new Float64Array(8),
+    gBuf: new Float64Array(8),
+  };
 }
 function releaseWorkspace(w: Workspace): void {
   if (freeWorkspaces.length >= 8) freeWorkspaces.shift();
@@ -120,13 +142,13 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const wall0 = performance.now();
   const settings = { ...DEFAULT_SOLVER, ...station.solver };
   const net = buildNetwork(station);
-  const rhs = new CircuitRhs(net);
+  const ws = acquireWorkspace(net);
+  const rhs = ws.rhs;
   const N = rhs.size;
   const nLoops = rhs.nLoops;
   const scales = stateScales(rhs);
   rhs.instantCommutation_s = 1e-6 * scales.time_s;
   const integrator = options.integrator ?? chooseIntegrator(settings.method, rhs, scales);
-  const ws = acquireWorkspace(N);
   const absTol = ws.a[0];
   for (let i = 0; i < N; i++) absTol[i] = settings.absTol * scales.state[i];
   const intOpts: StiffOptions = {
@@ -208,7 +230,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   // ---- phase loop ------------------------------------------------------------------------------
   // the step log is only needed to sample the waveform afterwards
   const keepLog = settings.samples > 0;
-  const log = new StepLog(N, keepLog ? 64 : 1);
+  const log = ws.log;
   const coilCurve = ws.curve;
   coilCurve.count = 0;
   const phases: PhaseRecord[] = [];
@@ -225,7 +247,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   // per-phase observer state
   let events: ModeEvent[] = [];
   let armed: boolean[] = [];
-  let gPrev = new Float64Array(8);
+  let gPrev = ws.gPrev;
   let phaseIndex = 0;
   let prevT = 0;
   const prevY = ws.a[7];
@@ -238,7 +260,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const hitDy = ws.a[9];
   const lastY = ws.a[10];
   let lastT = 0;
-  const gBuf = new Float64Array(8);
+  const gBuf = ws.gBuf;
 
   const sampleCoil = (tt: number): number => view!.denseComponent(IL, tt);
   const observer = (s: StepView): boolean => {

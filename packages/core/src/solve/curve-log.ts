@@ -74,6 +74,25 @@ export class CurveLog {
     return num / den;
   }
 
+  // The function Brent's method solves, s·curve_k(t) − level, made once per CurveLog (the engine
+  // keeps its CurveLog between shots) and reading its parameters from these fields.
+  private rootK = 0;
+  private rootSign = 1;
+  private rootLevel = 0;
+  private readonly rootFn = (t: number): number => this.rootSign * this.valueAt(this.rootK, t) - this.rootLevel;
+
+  /** The crossing of s·curve_k with level in [a, b] (NaN if no sign change). */
+  private root(k: number, a: number, b: number, s: number, level: number, tol: number): number {
+    this.rootK = k;
+    this.rootSign = s;
+    this.rootLevel = level;
+    const f = this.rootFn;
+    const fa = f(a);
+    const fb = f(b);
+    if (fa * fb > 0) return Number.NaN;
+    return brentZero(f, a, b, fa, fb, tol);
+  }
+
   private startValue(k: number): number {
     return this.v[k * M];
   }
@@ -89,19 +108,12 @@ export class CurveLog {
    * @param tol time tolerance, s
    */
   crossing(level: number, s: number, side: 'rise' | 'fall', tPeak: number, tol: number): number {
-    const root = (k: number, a: number, b: number): number => {
-      const f = (t: number) => s * this.valueAt(k, t) - level;
-      const fa = f(a);
-      const fb = f(b);
-      if (fa * fb > 0) return Number.NaN;
-      return brentZero(f, a, b, fa, fb, tol);
-    };
     if (side === 'rise') {
       for (let k = this.count - 1; k >= 0; k--) {
         if (this.t0[k] >= tPeak) continue;
         const b = Math.min(this.t1[k], tPeak);
         const vb = s * this.valueAt(k, b);
-        if (s * this.startValue(k) < level && vb >= level) return root(k, this.t0[k], b);
+        if (s * this.startValue(k) < level && vb >= level) return this.root(k, this.t0[k], b, s, level, tol);
         if (s * this.startValue(k) < level) return Number.NaN;
       }
       return Number.NaN;
@@ -109,7 +121,7 @@ export class CurveLog {
     for (let k = 0; k < this.count; k++) {
       if (this.t1[k] <= tPeak) continue;
       const a = Math.max(this.t0[k], tPeak);
-      if (s * this.valueAt(k, a) >= level && s * this.endValue(k) < level) return root(k, a, this.t1[k]);
+      if (s * this.valueAt(k, a) >= level && s * this.endValue(k) < level) return this.root(k, a, this.t1[k], s, level, tol);
       if (s * this.valueAt(k, a) < level) return a;
     }
     return Number.NaN;

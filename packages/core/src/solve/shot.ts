@@ -134,6 +134,31 @@ class SwitchDidt implements Quantity {
   }
 }
 
+/**
+ * The field at probe p as a tracked quantity: linear in the currents, except at the first probe of
+ * a nonlinear coil (the coil's field curve, slope by a central difference of step dI, A).
+ * Module-level (not a closure per shot): sweeps run thousands of short shots.
+ */
+function fieldQuantity(net: Network, p: number, dI: number): Quantity {
+  const nl = net.coil.nonlinear;
+  const nLoops = net.loops.length;
+  const pr = net.probes[p];
+  if (!(nl && p === 0)) return new LinearQuantity(coilAndLoopCurrents(nLoops), [pr.coil_ApmPerA, ...pr.loops_ApmPerA]);
+  return {
+    value(yy) {
+      let h = nl.fieldAtPart_Apm(yy[IL]);
+      for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * yy[loopCurrentIndex(k)];
+      return h;
+    },
+    slope(yy, d) {
+      const i = yy[IL];
+      let h = ((nl.fieldAtPart_Apm(i + dI) - nl.fieldAtPart_Apm(i - dI)) / (2 * dI)) * d[IL];
+      for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * d[loopCurrentIndex(k)];
+      return h;
+    },
+  };
+}
+
 const NO_COMPONENTS: number[] = [];
 
 type EndReason = 'current-zero' | 'decayed' | 't-max' | 'step-limit' | 'step-too-small' | 'chattering';
@@ -184,28 +209,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   };
 
   // ---- tracked quantities -------------------------------------------------------------------
-  const nl = net.coil.nonlinear;
   const dI = 1e-6 * scales.current_A;
-  const fieldQuantity = (p: number): Quantity => {
-    const pr = net.probes[p];
-    if (!(nl && p === 0)) {
-      return new LinearQuantity(coilAndLoopCurrents(nLoops), [pr.coil_ApmPerA, ...pr.loops_ApmPerA]);
-    }
-    const coilField = nl && p === 0 ? (i: number) => nl.fieldAtPart_Apm(i) : (i: number) => pr.coil_ApmPerA * i;
-    const coilSlope = nl && p === 0 ? (i: number) => (nl.fieldAtPart_Apm(i + dI) - nl.fieldAtPart_Apm(i - dI)) / (2 * dI) : () => pr.coil_ApmPerA;
-    return {
-      value(yy) {
-        let h = coilField(yy[IL]);
-        for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * yy[loopCurrentIndex(k)];
-        return h;
-      },
-      slope(yy, d) {
-        let h = coilSlope(yy[IL]) * d[IL];
-        for (let k = 0; k < nLoops; k++) h += pr.loops_ApmPerA[k] * d[loopCurrentIndex(k)];
-        return h;
-      },
-    };
-  };
   const jvY = ws.a[5];
   const jvDy = ws.a[6];
   const hJv = 1e-6 * scales.time_s;
@@ -222,7 +226,7 @@ export function simulateShot(station: Station, options: SimulateOptions = {}): S
   const switchTracker = new ExtremumTracker(new LinearQuantity([IS], [1]), probe, eventTol);
   const diodeTracker = new ExtremumTracker(new LinearQuantity([IL, IS], [1, -1]), probe, eventTol);
   const didtTracker = new ExtremumTracker(switchDidt, probe, eventTol);
-  const probeTrackers = net.probes.map((_, p) => new ExtremumTracker(fieldQuantity(p), probe, eventTol));
+  const probeTrackers = net.probes.map((_, p) => new ExtremumTracker(fieldQuantity(net, p, dI), probe, eventTol));
   const loopTrackers = net.loops.map((_, k) => new ExtremumTracker(new LinearQuantity([loopCurrentIndex(k)], [1]), probe, eventTol));
   const trackers = [coilTracker, switchTracker, diodeTracker, didtTracker, ...probeTrackers, ...loopTrackers];
   let minCapV = net.voltage_V;

@@ -9,9 +9,8 @@ import { DIMENSIONS } from '../units/quantity.js';
 import { formatQuantity } from '../report/quantity.js';
 import { safetyNotice, type ChargedBank } from '../report/safety.js';
 import { histogramSvg, type HistogramInput } from '../report/plot-histogram.js';
-import { REPORT_CSS, htmlTable } from '../report/html.js';
+import { htmlPage, htmlTable } from '../report/html.js';
 import type { Table } from '../report/sections.js';
-import { esc } from '../report/svg/svg.js';
 import type { Distribution } from './summarize.js';
 import type { ToleranceResult } from './runTolerance.js';
 import { partField } from './solveVoltage.js';
@@ -131,27 +130,14 @@ export function toleranceReportHtml(r: ToleranceResult, design: Design, designNa
     rows: r.fields.map((f) => ({ cells: [f.path.text, formatQuantity(f.nominal, DIMENSIONS[f.dimension].unit), `±${(f.fraction * 100).toPrecision(3).replace(/\.?0+$/, '')} %`] })),
     notes: [describeRun(r)],
   };
-  return [
-    '<!DOCTYPE html>',
-    '<html lang="en">',
-    '<head>',
-    '<meta charset="utf-8">',
-    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
-    '<meta name="viewport" content="width=device-width, initial-scale=1">',
-    `<title>Tolerance run: ${esc(name)}</title>`,
-    `<style>${REPORT_CSS}</style>`,
-    '</head>',
-    '<body>',
-    '<header>',
-    `<h1>Tolerance run: ${esc(name)}</h1>`,
-    '</header>',
-    safetyNotice(bank, 'html').trimEnd(),
-    htmlTable(fields),
-    htmlTable(distributionTable(r)),
-    '<h2 id="histogram">Histogram</h2>',
-    `<figure>${histogramSvg(toleranceHistogramInput(r, name), { id: 'hist' })}<figcaption>Peak field at the part over the shots; the rule marks the required field, hatched bars fall short of it.</figcaption></figure>`,
-    '</body>',
-    '</html>',
-    '',
-  ].join('\n');
+  return htmlPage({
+    title: `Tolerance run: ${name}`,
+    safety: safetyNotice(bank, 'html'),
+    body: [
+      htmlTable(fields),
+      htmlTable(distributionTable(r)),
+      '<h2 id="histogram">Histogram</h2>',
+      `<figure>${histogramSvg(toleranceHistogramInput(r, name), { id: 'hist' })}<figcaption>Peak field at the part over the shots; the rule marks the required field, hatched bars fall short of it.</figcaption></figure>`,
+    ],
+  });
 }

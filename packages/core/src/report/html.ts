@@ -116,22 +116,7 @@ export function shotReportHtml(input: ShotReportInput): string {
     ? `<p class="overall ${verdict.overall}">Overall verdict: <strong>${verdict.overall.toUpperCase()}</strong> (${esc(verdictCounts(verdict))}).</p>`
     : '<p class="overall">No verdict was computed for this shot (no limits given).</p>';
   const plot = pulsePlotSvg(result, { title: `Pulse of "${name}"`, id: 'pulse' });
-  const parts = [
-    '<!DOCTYPE html>',
-    '<html lang="en">',
-    '<head>',
-    '<meta charset="utf-8">',
-    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
-    '<meta name="viewport" content="width=device-width, initial-scale=1">',
-    `<title>Shot report: ${esc(name)}</title>`,
-    `<style>${REPORT_CSS}</style>`,
-    '</head>',
-    '<body>',
-    '<header>',
-    `<h1>Shot report: ${esc(name)}</h1>`,
-    input.subtitle ? `<p class="subtitle">${esc(input.subtitle)}</p>` : '',
-    '</header>',
-    safetyNotice(station, 'html').trimEnd(),
+  const body = [
     overall,
     section('station'),
     section('figures'),
@@ -145,9 +130,36 @@ export function shotReportHtml(input: ShotReportInput): string {
     section('energy'),
     section('warnings'),
     '<footer>Computed by fluxkick from the station values listed above. The figures are model results: check them against a low-voltage test shot before relying on them.</footer>',
+  ];
+  return htmlPage({ title: `Shot report: ${name}`, subtitle: input.subtitle, safety: safetyNotice(station, 'html'), body });
+}
+
+/**
+ * One self-contained HTML page of ours: the content-security policy that forbids every external
+ * resource, the inline stylesheet, the title as heading, then the safety notice (always first, above
+ * any figure), then the body parts (already HTML; empty strings are dropped).
+ */
+export function htmlPage(page: { title: string; subtitle?: string; safety: string; body: readonly string[] }): string {
+  const parts = [
+    '<!DOCTYPE html>',
+    '<html lang="en">',
+    '<head>',
+    '<meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    `<title>${esc(page.title)}</title>`,
+    `<style>${REPORT_CSS}</style>`,
+    '</head>',
+    '<body>',
+    '<header>',
+    `<h1>${esc(page.title)}</h1>`,
+    page.subtitle ? `<p class="subtitle">${esc(page.subtitle)}</p>` : '',
+    '</header>',
+    page.safety.trimEnd(),
+    ...page.body,
     '</body>',
     '</html>',
     '',
   ];
-  return parts.filter((p) => p !== '').join('\n');
+  return parts.filter((p, i) => p !== '' || i === parts.length - 1).join('\n');
 }

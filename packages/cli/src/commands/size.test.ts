@@ -32,6 +32,7 @@ describe('fluxkick size', () => {
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out) as { ok: boolean; voltage_V: number; field_Apm: number; targetField_Apm: number };
     expect(j.ok).toBe(true);
+    // the design's part section: required 2.2 MA/m with a 10 % margin → 2.42 MA/m (arithmetic)
     expect(j.targetField_Apm).toBeCloseTo(2.42e6, 3);
     expect(j.field_Apm).toBeGreaterThanOrEqual(j.targetField_Apm);
     expect(j.field_Apm).toBeLessThanOrEqual(j.targetField_Apm * (1 + 1e-5));
